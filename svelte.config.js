@@ -5,7 +5,8 @@ import { vitePreprocess } from '@sveltejs/vite-plugin-svelte';
 const config = {
 	preprocess: vitePreprocess(),
 	kit: {
-		adapter: adapter({ out: 'build' })
+		// The tests build into their own folder so a running `npm start` is never rebuilt underneath.
+		adapter: adapter({ out: process.env.BUILD_DIR || 'build' })
 	}
 };
 

@@ -1,0 +1,21 @@
+#!/usr/bin/env bash
+# `npm start`: MariaDB, migrations, demo data, the local fakes and the built app, all on loopback.
+# Safe to run again: migrations and seeders skip what is done, services already running are reused.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+. scripts/env.sh
+
+mkdir -p .data/run
+bash scripts/db.sh start
+node --import tsx scripts/migrate.ts up
+node --import tsx scripts/migrate.ts seed
+bash scripts/fakes.sh start
+
+# Build only when the sources changed since the last build.
+if [ ! -f build/index.js ] || [ -n "$(find src static svelte.config.js vite.config.ts tailwind.config.js package-lock.json -newer build/index.js -print -quit)" ]; then
+	echo "[start] building the app"
+	node node_modules/vite/bin/vite.js build --logLevel warn
+fi
+
+echo "[start] Throwline on $ORIGIN (stop with Ctrl-C; 'npm stop' also stops MariaDB and the fakes)"
+exec node build

@@ -1,0 +1,43 @@
+import { SvelteKitAuth, CredentialsSignin } from '@auth/sveltekit';
+import Credentials from '@auth/sveltekit/providers/credentials';
+import { signInSchema } from '$lib/schemas/auth';
+import { checkCredentials } from '$lib/server/auth/credentials';
+
+class InactiveAccount extends CredentialsSignin {
+	code = 'inactive';
+}
+
+export const { handle, signIn, signOut } = SvelteKitAuth({
+	trustHost: true,
+	session: { strategy: 'jwt', maxAge: 12 * 60 * 60 },
+	pages: { signIn: '/signin', error: '/signin' },
+	providers: [
+		Credentials({
+			credentials: { email: {}, password: {} },
+			async authorize(raw) {
+				const parsed = signInSchema.safeParse(raw);
+				if (!parsed.success) return null;
+				const result = await checkCredentials(parsed.data.email, parsed.data.password);
+				if (result.ok) return result.user;
+				if (result.reason === 'inactive') throw new InactiveAccount();
+				return null;
+			}
+		})
+	],
+	callbacks: {
+		jwt({ token, user }) {
+			if (user) {
+				token.sub = user.id;
+				token.role = (user as { role?: string }).role;
+			}
+			return token;
+		},
+		session({ session, token }) {
+			if (session.user) {
+				session.user.id = token.sub ?? '';
+				(session.user as { role?: unknown }).role = token.role;
+			}
+			return session;
+		}
+	}
+});

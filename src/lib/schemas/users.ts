@@ -1,0 +1,31 @@
+import { z } from 'zod';
+import { ROLES } from '../permissions';
+
+export const userCreateSchema = z
+	.object({
+		email: z.string().trim().toLowerCase().max(254).pipe(z.email('Enter a valid e-mail address')),
+		name: z.string().trim().min(2, 'Enter the person’s name').max(120),
+		role: z.enum(ROLES, { error: 'Choose a role' }),
+		password: z
+			.string()
+			.max(200)
+			.refine((p) => p === '' || p.length >= 10, 'Use at least 10 characters, or leave empty to generate one')
+			.default(''),
+		clientId: z.coerce.number().int().positive().nullable().default(null)
+	})
+	.refine((u) => u.role !== 'client' || u.clientId !== null, {
+		path: ['clientId'],
+		message: 'A client account belongs to a client organisation; choose one'
+	});
+export type UserCreateInput = z.infer<typeof userCreateSchema>;
+
+export const userUpdateSchema = z
+	.object({
+		name: z.string().trim().min(2).max(120),
+		role: z.enum(ROLES, { error: 'Choose a role' }),
+		active: z.boolean(),
+		clientId: z.number().int().positive().nullable()
+	})
+	.partial()
+	.strict();
+export type UserUpdateInput = z.infer<typeof userUpdateSchema>;

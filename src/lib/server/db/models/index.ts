@@ -1,0 +1,14 @@
+import type { Sequelize } from 'sequelize';
+import { Client } from './client';
+import { User } from './user';
+
+export { Client, User };
+
+/** Registers every model and association on one Sequelize instance. */
+export function initModels(sequelize: Sequelize): void {
+	Client.initModel(sequelize);
+	User.initModel(sequelize);
+
+	Client.hasMany(User, { foreignKey: 'clientId', as: 'users' });
+	User.belongsTo(Client, { foreignKey: 'clientId', as: 'client' });
+}

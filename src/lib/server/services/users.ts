@@ -1,0 +1,94 @@
+import { randomBytes } from 'node:crypto';
+import { UniqueConstraintError } from 'sequelize';
+import type { Role } from '$lib/permissions';
+import type { UserCreateInput, UserUpdateInput } from '$lib/schemas/users';
+import { hashPassword } from '../auth/password';
+import { Client, User } from '../db/models';
+import { DomainError } from './errors';
+
+export interface UserRow {
+	id: number;
+	email: string;
+	name: string;
+	role: Role;
+	active: boolean;
+	clientId: number | null;
+	clientName: string | null;
+	lastSignInAt: string | null;
+	createdAt: string;
+}
+
+function toRow(user: User & { client?: Client | null }): UserRow {
+	return {
+		id: user.id,
+		email: user.email,
+		name: user.name,
+		role: user.role,
+		active: user.active,
+		clientId: user.clientId,
+		clientName: user.client?.name ?? null,
+		lastSignInAt: user.lastSignInAt ? user.lastSignInAt.toISOString() : null,
+		createdAt: user.createdAt.toISOString()
+	};
+}
+
+export async function listUsers(): Promise<UserRow[]> {
+	const users = await User.findAll({
+		include: [{ model: Client, as: 'client', attributes: ['name'] }],
+		order: [['name', 'ASC']]
+	});
+	return users.map(toRow);
+}
+
+export async function listClientOptions(): Promise<{ id: number; name: string }[]> {
+	const clients = await Client.findAll({ attributes: ['id', 'name'], order: [['name', 'ASC']] });
+	return clients.map((c) => ({ id: c.id, name: c.name }));
+}
+
+/** Creates an account. With no password given, one is generated and returned once to show the admin. */
+export async function createUser(
+	input: UserCreateInput
+): Promise<{ user: UserRow; generatedPassword: string | null }> {
+	const generatedPassword = input.password ? null : randomBytes(9).toString('base64url');
+	const clientId = input.role === 'client' ? input.clientId : null;
+	if (clientId !== null && !(await Client.findByPk(clientId))) {
+		throw new DomainError(422, 'That client does not exist.', { clientId: ['Choose an existing client'] });
+	}
+	try {
+		const created = await User.create({
+			email: input.email,
+			name: input.name,
+			role: input.role,
+			clientId,
+			passwordHash: await hashPassword(input.password || generatedPassword!)
+		});
+		const user = await User.findByPk(created.id, { include: [{ model: Client, as: 'client' }] });
+		return { user: toRow(user!), generatedPassword };
+	} catch (err) {
+		if (err instanceof UniqueConstraintError) {
+			throw new DomainError(409, 'Someone already signs in with that e-mail.', {
+				email: ['This e-mail is already in use']
+			});
+		}
+		throw err;
+	}
+}
+
+/** Changes name, role or active status. An admin cannot lock themselves out. */
+export async function updateUser(actorId: number, id: number, changes: UserUpdateInput): Promise<UserRow> {
+	const user = await User.findByPk(id, { include: [{ model: Client, as: 'client' }] });
+	if (!user) throw new DomainError(404, 'No such user.');
+	if (actorId === id && (changes.active === false || (changes.role && changes.role !== 'admin'))) {
+		throw new DomainError(409, 'You cannot deactivate yourself or drop your own admin role.');
+	}
+	const role = changes.role ?? user.role;
+	const clientId = role === 'client' ? (changes.clientId ?? user.clientId) : null;
+	if (role === 'client' && clientId === null) {
+		throw new DomainError(422, 'A client account needs a client organisation.', {
+			clientId: ['Choose a client']
+		});
+	}
+	await user.update({ ...changes, clientId });
+	await user.reload({ include: [{ model: Client, as: 'client' }] });
+	return toRow(user);
+}

@@ -1,0 +1,54 @@
+import { fail, isRedirect, redirect } from '@sveltejs/kit';
+import { message, superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import type { CredentialsSignin } from '@auth/sveltekit';
+import { signIn } from '../../../auth';
+import { safeRedirectPath, signInSchema } from '$lib/schemas/auth';
+import type { Actions, PageServerLoad } from './$types';
+
+const NOT_RECOGNISED = 'That e-mail and password do not match an account. Check both and try again.';
+const INACTIVE = 'This account has been deactivated. Ask your Throwline admin to restore it.';
+
+export const load: PageServerLoad = async ({ locals, url }) => {
+	const redirectTo = safeRedirectPath(url.searchParams.get('redirectTo'));
+	if (locals.user) redirect(303, redirectTo);
+	const form = await superValidate({ redirectTo }, zod4(signInSchema), { errors: false });
+	return { form };
+};
+
+export const actions: Actions = {
+	default: async (event) => {
+		const form = await superValidate(event.request, zod4(signInSchema));
+		const password = form.data.password;
+		form.data.password = ''; // never echo a password back to the page
+		if (!form.valid) return fail(400, { form });
+
+		// Hand the checked fields to Auth.js's credentials callback; it sets the session cookie.
+		const headers = new Headers(event.request.headers);
+		headers.delete('content-type');
+		const body = new FormData();
+		body.set('providerId', 'credentials');
+		body.set('email', form.data.email);
+		body.set('password', password);
+		body.set('redirectTo', safeRedirectPath(form.data.redirectTo));
+		const request = new Request(event.request.url, { method: 'POST', headers, body });
+
+		try {
+			await signIn({ ...event, request });
+		} catch (thrown) {
+			// Success arrives as a redirect; a refusal as CredentialsSignin carrying our code.
+			if (isRedirect(thrown)) {
+				const target = new URL(thrown.location, event.url);
+				redirect(303, safeRedirectPath(target.pathname + target.search));
+			}
+			if (!isCredentialsSignin(thrown)) throw thrown;
+			const inactive = thrown.code === 'inactive';
+			return message(form, inactive ? INACTIVE : NOT_RECOGNISED, { status: inactive ? 403 : 401 });
+		}
+		return message(form, NOT_RECOGNISED, { status: 401 });
+	}
+};
+
+function isCredentialsSignin(thrown: unknown): thrown is CredentialsSignin {
+	return (thrown as { type?: string } | null)?.type === 'CredentialsSignin';
+}
