@@ -7,7 +7,7 @@ export default defineConfig({
 	// MariaDB, uploads and mail live in .data/; watching them would reload the dev server on every write.
 	server: { watch: { ignored: ['**/.data/**'] } },
 	test: {
-		include: ['src/**/*.spec.ts', 'tests/unit/**/*.spec.ts', 'tests/db/**/*.spec.ts'],
+		include: ['src/**/*.spec.ts', 'tests/unit/**/*.spec.ts', 'tests/db/**/*.spec.ts', 'tests/fakes/**/*.spec.ts'],
 		environment: 'node',
 		testTimeout: 20_000,
 		hookTimeout: 60_000

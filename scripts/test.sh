@@ -17,7 +17,7 @@ step() { echo; echo "== $*"; }
 
 step "services"
 mkdir -p "$RUN_DIR"
-rm -rf "$MAIL_DIR" "$UPLOAD_DIR"
+rm -rf "$MAIL_DIR" "$UPLOAD_DIR" "$RUN_DIR/stripe-state.json"
 bash scripts/db.sh start
 bash scripts/db.sh drop >/dev/null
 node --import tsx scripts/migrate.ts up
