@@ -27,3 +27,4 @@ export STRIPE_ACCOUNT_NAME="Throwline test hire company"
 export UPLOAD_DIR=.data/test/uploads
 export RUN_DIR=.data/test/run
 export BUILD_DIR=.data/test/build
+export BODY_SIZE_LIMIT=11M

@@ -10,6 +10,11 @@ describe('permissions', () => {
 	it('treats admin, warehouse and sales as staff, not clients', () => {
 		expect(ROLES.filter(isStaff)).toEqual(['admin', 'warehouse', 'sales']);
 	});
+	it('shows the inventory to staff, never to clients', () => {
+		for (const role of ROLES) {
+			expect(navigationFor(role).some((item) => item.href === '/inventory')).toBe(role !== 'client');
+		}
+	});
 	it('shows user management only to admins', () => {
 		for (const role of ROLES) {
 			const hrefs = navigationFor(role).map((item) => item.href);

@@ -1,0 +1,58 @@
+/** What a technician reads beside each field: a plain label and its unit. */
+export const FIELD_LABELS: Record<string, { label: string; unit?: string }> = {
+	name: { label: 'Name' },
+	maker: { label: 'Maker' },
+	kind: { label: 'Kind' },
+	sensitivityDb: { label: 'Sensitivity', unit: 'dB' },
+	sensitivityRef: { label: 'Sensitivity reference' },
+	impedanceOhm: { label: 'Nominal impedance', unit: 'Ω' },
+	powerContinuousW: { label: 'Continuous power', unit: 'W' },
+	powerPeakW: { label: 'Peak power', unit: 'W' },
+	maxSplContinuousDb: { label: 'Max SPL, continuous', unit: 'dB' },
+	maxSplPeakDb: { label: 'Max SPL, peak', unit: 'dB' },
+	dispersionHDeg: { label: 'Horizontal dispersion', unit: '°' },
+	dispersionVDeg: { label: 'Vertical dispersion', unit: '°' },
+	lowHz: { label: 'Low frequency limit', unit: 'Hz' },
+	highHz: { label: 'High frequency limit', unit: 'Hz' },
+	heightM: { label: 'Element height', unit: 'm' },
+	weightKg: { label: 'Weight', unit: 'kg' },
+	dayRateMinor: { label: 'Day rate', unit: 'minor units' },
+	replacementValueMinor: { label: 'Replacement value', unit: 'minor units' },
+	notes: { label: 'Notes' },
+	channels: { label: 'Channels' },
+	powerW8: { label: 'Power per channel at 8 Ω', unit: 'W' },
+	powerW4: { label: 'Power per channel at 4 Ω', unit: 'W' },
+	powerW2: { label: 'Power per channel at 2 Ω', unit: 'W' },
+	minLoadOhm: { label: 'Minimum load', unit: 'Ω' },
+	rackUnits: { label: 'Rack units', unit: 'U' },
+	mainsCurrentAmps: { label: 'Mains current at 1/8 power', unit: 'A' },
+	slug: { label: 'Slug' },
+	description: { label: 'Description' },
+	active: { label: 'Active' },
+	groups: { label: 'Groups' },
+	serial: { label: 'Serial' },
+	status: { label: 'Status' },
+	location: { label: 'Location' },
+	lastTestedAt: { label: 'Last tested' },
+	modelId: { label: 'Model' }
+};
+
+export const KIND_LABELS = {
+	'full-range': 'Full-range top',
+	subwoofer: 'Subwoofer',
+	'line-array-element': 'Line-array element',
+	monitor: 'Monitor wedge'
+} as const;
+
+export const STATUS_LABELS = { ready: 'Ready', 'in-repair': 'In repair', retired: 'Retired' } as const;
+
+export function fieldLabel(field: string): string {
+	const entry = FIELD_LABELS[field];
+	if (!entry) return field;
+	return entry.unit ? `${entry.label} (${entry.unit})` : entry.label;
+}
+
+/** Minor units shown as major with two decimals (the currency itself is a company setting). */
+export function formatMinor(minor: number): string {
+	return (minor / 100).toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
+}

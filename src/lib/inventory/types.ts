@@ -1,0 +1,71 @@
+import type { AmplifierInput } from '$lib/schemas/inventory-amplifiers';
+import type { LoudspeakerInput } from '$lib/schemas/inventory-loudspeakers';
+import type { UnitStatus } from '$lib/schemas/inventory-units';
+
+/** Plain rows as the inventory services return them (dates as ISO strings). */
+interface Stamped {
+	id: number;
+	createdAt: string;
+	updatedAt: string;
+}
+
+export type LoudspeakerModelRow = LoudspeakerInput & Stamped;
+export type AmplifierModelRow = AmplifierInput & Stamped;
+
+export interface PackageGroupRow {
+	id: number;
+	position: number;
+	loudspeakerModelId: number;
+	count: number;
+	stacks: number;
+	amplifierModelId: number;
+	cabinetsPerChannel: number;
+	flown: boolean;
+}
+
+export interface PackageRow extends Stamped {
+	name: string;
+	slug: string;
+	description: string;
+	active: boolean;
+	groups: PackageGroupRow[];
+}
+
+/** A group with its two models loaded: what the mapping and the bill of materials need. */
+export type LoadedGroup = PackageGroupRow & { loudspeaker: LoudspeakerModelRow; amplifier: AmplifierModelRow };
+export type LoadedPackage = Omit<PackageRow, 'groups'> & { groups: LoadedGroup[] };
+
+export interface StockUnitRow extends Stamped {
+	serial: string;
+	modelType: 'loudspeaker' | 'amplifier';
+	modelId: number;
+	modelName: string;
+	status: UnitStatus;
+	location: string;
+	lastTestedAt: string | null;
+	notes: string;
+}
+
+export type HistoryModelType = 'loudspeaker' | 'amplifier' | 'package' | 'unit';
+
+export interface SpecChangeRow {
+	id: number;
+	field: string;
+	oldValue: string | null;
+	newValue: string | null;
+	userId: number | null;
+	userName: string | null;
+	createdAt: string;
+}
+
+export interface AttachmentRow {
+	id: number;
+	modelType: 'loudspeaker' | 'amplifier';
+	modelId: number;
+	kind: 'spec-sheet' | 'photo';
+	originalName: string;
+	mimeType: string;
+	sizeBytes: number;
+	uploadedBy: number | null;
+	createdAt: string;
+}

@@ -1,0 +1,59 @@
+import { ForeignKeyConstraintError, UniqueConstraintError, type Model, type Transaction } from 'sequelize';
+import type { z } from 'zod';
+import { fieldErrors } from '../http';
+import { AmplifierModel, LoudspeakerModel } from '../db/models';
+import { CATALOGUE, invalidate } from '../cache';
+import { DomainError } from './errors';
+
+/**
+ * Runs `work` in the caller's transaction, or in a new one when the caller has none. Every inventory
+ * write passes here, so this is where the quoting engine's cached catalogue is dropped on commit.
+ */
+export async function withTransaction<T>(transaction: Transaction | undefined, work: (t: Transaction) => Promise<T>): Promise<T> {
+	const run = (t: Transaction) => {
+		t.afterCommit(() => invalidate(CATALOGUE));
+		return work(t);
+	};
+	if (transaction) return run(transaction);
+	return LoudspeakerModel.sequelize!.transaction(run);
+}
+
+/** A model instance as a plain object with dates as ISO strings, safe to return from `load` and the API. */
+export function plainRow<T extends object>(instance: Model): T {
+	const plain = instance.get({ plain: true }) as Record<string, unknown>;
+	for (const [key, value] of Object.entries(plain)) {
+		if (value instanceof Date) plain[key] = value.toISOString();
+	}
+	return plain as T;
+}
+
+/** Validates a complete record with the shared schema; field errors become a 422 in the one envelope. */
+export function validOrThrow<S extends z.ZodType>(schema: S, value: unknown): z.output<S> {
+	const result = schema.safeParse(value);
+	if (!result.success) throw new DomainError(422, 'Some fields need attention.', fieldErrors(result.error.issues));
+	return result.data;
+}
+
+/** Maps the database's own refusals to the answers people understand. */
+export function translateDbError(err: unknown, duplicate: { field: string; message: string }): never {
+	if (err instanceof UniqueConstraintError) {
+		throw new DomainError(409, duplicate.message, { [duplicate.field]: [duplicate.message] });
+	}
+	if (err instanceof ForeignKeyConstraintError) {
+		throw new DomainError(409, 'Something else still refers to this record (a package, stock unit or quote).');
+	}
+	throw err;
+}
+
+/** The text a history entry keeps for a value. */
+export function historyText(value: unknown): string | null {
+	if (value === null || value === undefined) return null;
+	if (value instanceof Date) return value.toISOString();
+	return String(value);
+}
+
+/** Whether a loudspeaker or amplifier model with this id exists. */
+export async function specModelExists(modelType: 'loudspeaker' | 'amplifier', id: number, transaction?: Transaction): Promise<boolean> {
+	const found = modelType === 'loudspeaker' ? await LoudspeakerModel.findByPk(id, { transaction }) : await AmplifierModel.findByPk(id, { transaction });
+	return found !== null;
+}

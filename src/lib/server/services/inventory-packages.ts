@@ -1,0 +1,137 @@
+import type { Transaction } from 'sequelize';
+import { channelPlanErrors } from '$lib/inventory/channel-plan';
+import type { LoadedPackage, PackageRow } from '$lib/inventory/types';
+import { packageSchema, type PackageInput, type PackagePatch } from '$lib/schemas/inventory-packages';
+import { AmplifierModel, LoudspeakerModel, Package, PackageGroup } from '../db/models';
+import { DomainError } from './errors';
+import { plainRow, translateDbError, validOrThrow, withTransaction } from './inventory-common';
+import { deleteHistory, recordChanges, recordCreation } from './inventory-history';
+
+const DUPLICATE = { field: 'slug', message: 'Another package already uses this slug' };
+const FIELDS = ['name', 'slug', 'description', 'active', 'groups'] as const;
+const groupOrder = [[{ model: PackageGroup, as: 'groups' }, 'position', 'ASC']] as [object, string, string][];
+
+function toRow(pkg: Package): PackageRow {
+	const row = plainRow<PackageRow>(pkg);
+	row.groups = (pkg.groups ?? []).map((g) => {
+		const { packageId: _p, loudspeaker: _l, amplifier: _a, ...group } = g.get({ plain: true }) as PackageGroup & Record<string, unknown>;
+		return group;
+	});
+	return row;
+}
+
+async function find(id: number, transaction?: Transaction): Promise<Package> {
+	const found = await Package.findByPk(id, { include: [{ model: PackageGroup, as: 'groups' }], order: groupOrder as never, transaction });
+	if (!found) throw new DomainError(404, 'No such package.');
+	return found;
+}
+
+export async function listPackages(): Promise<PackageRow[]> {
+	const rows = await Package.findAll({ include: [{ model: PackageGroup, as: 'groups' }], order: [['name', 'ASC'], ...groupOrder] as never });
+	return rows.map(toRow);
+}
+
+export async function getPackage(id: number): Promise<PackageRow> {
+	return toRow(await find(id));
+}
+
+const loadedInclude = [
+	{ model: PackageGroup, as: 'groups', include: [{ model: LoudspeakerModel, as: 'loudspeaker' }, { model: AmplifierModel, as: 'amplifier' }] }
+];
+
+function toLoaded(pkg: Package): LoadedPackage {
+	return {
+		...plainRow<Omit<LoadedPackage, 'groups'>>(pkg),
+		groups: (pkg.groups ?? []).map((g) => {
+			const { packageId: _p, ...group } = g.get({ plain: true }) as PackageGroup & Record<string, unknown>;
+			return { ...group, loudspeaker: plainRow(g.loudspeaker!), amplifier: plainRow(g.amplifier!) };
+		})
+	} as LoadedPackage;
+}
+
+/** A package with every group's loudspeaker and amplifier model: input for the spec mapping and bill of materials. */
+export async function getLoadedPackage(id: number): Promise<LoadedPackage> {
+	const found = await Package.findByPk(id, { include: loadedInclude, order: groupOrder as never });
+	if (!found) throw new DomainError(404, 'No such package.');
+	return toLoaded(found);
+}
+
+/** Every package with its models loaded, in name order (the list page and the quoting engine). */
+export async function listLoadedPackages(): Promise<LoadedPackage[]> {
+	const rows = await Package.findAll({ include: loadedInclude, order: [['name', 'ASC'], ...groupOrder] as never });
+	return rows.map(toLoaded);
+}
+
+/** Loads each group's models and refuses (422, per field) unknown models or an unsafe channel plan. */
+async function checkGroups(groups: PackageInput['groups'], transaction: Transaction): Promise<void> {
+	const errors: Record<string, string[]> = {};
+	const planned = [];
+	for (const [i, g] of groups.entries()) {
+		const [loudspeaker, amplifier] = await Promise.all([
+			LoudspeakerModel.findByPk(g.loudspeakerModelId, { transaction }),
+			AmplifierModel.findByPk(g.amplifierModelId, { transaction })
+		]);
+		if (!loudspeaker) errors[`groups.${i}.loudspeakerModelId`] = ['No such loudspeaker model'];
+		if (!amplifier) errors[`groups.${i}.amplifierModelId`] = ['No such amplifier model'];
+		if (loudspeaker && amplifier) planned.push({ ...g, loudspeaker, amplifier, index: i });
+	}
+	for (const p of planned) {
+		for (const [key, messages] of Object.entries(channelPlanErrors([p]))) {
+			errors[key.replace('groups.0.', `groups.${p.index}.`)] = messages;
+		}
+	}
+	if (Object.keys(errors).length) throw new DomainError(422, 'The channel plan needs attention.', errors);
+}
+
+async function writeGroups(packageId: number, groups: PackageInput['groups'], transaction: Transaction): Promise<void> {
+	await PackageGroup.destroy({ where: { packageId }, transaction });
+	await PackageGroup.bulkCreate(groups.map((g, position) => ({ ...g, packageId, position })), { transaction });
+}
+
+/** A one-line summary of the groups, so the history can show old → new for the whole channel plan. */
+function groupsText(groups: readonly PackageInput['groups'][number][]): string {
+	return groups
+		.map((g) => `${g.stacks}×${g.count} of loudspeaker #${g.loudspeakerModelId} on amplifier #${g.amplifierModelId}, ${g.cabinetsPerChannel} per channel${g.flown ? ', flown' : ''}`)
+		.join('; ');
+}
+
+export async function createPackage(input: PackageInput, actorId: number | null, transaction?: Transaction): Promise<PackageRow> {
+	const values = validOrThrow(packageSchema, input);
+	return withTransaction(transaction, async (t) => {
+		await checkGroups(values.groups, t);
+		const { groups, ...fields } = values;
+		const created = await Package.create(fields, { transaction: t }).catch((err) => translateDbError(err, DUPLICATE));
+		await writeGroups(created.id, groups, t);
+		await recordCreation({ modelType: 'package', modelId: created.id }, values.name, actorId, t);
+		return toRow(await find(created.id, t));
+	});
+}
+
+export async function updatePackage(id: number, changes: PackagePatch, actorId: number | null, transaction?: Transaction): Promise<PackageRow> {
+	return withTransaction(transaction, async (t) => {
+		const current = await find(id, t);
+		const before = toRow(current);
+		const merged = validOrThrow(packageSchema, { name: before.name, slug: before.slug, description: before.description, active: before.active, groups: before.groups, ...changes });
+		await checkGroups(merged.groups, t);
+		const changed = await recordChanges(
+			{ modelType: 'package', modelId: id },
+			{ ...before, groups: groupsText(before.groups) },
+			{ ...merged, groups: groupsText(merged.groups) },
+			FIELDS,
+			actorId,
+			t
+		);
+		const { groups, ...fields } = merged;
+		await current.update(fields, { transaction: t }).catch((err) => translateDbError(err, DUPLICATE));
+		if (changed.includes('groups')) await writeGroups(id, groups, t);
+		return toRow(await find(id, t));
+	});
+}
+
+export async function deletePackage(id: number, transaction?: Transaction): Promise<void> {
+	await withTransaction(transaction, async (t) => {
+		const current = await find(id, t);
+		await deleteHistory('package', id, t);
+		await current.destroy({ transaction: t }).catch((err) => translateDbError(err, DUPLICATE));
+	});
+}

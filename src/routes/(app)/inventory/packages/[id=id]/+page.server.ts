@@ -1,0 +1,28 @@
+import { packageBillOfMaterials } from '$lib/inventory/bill-of-materials';
+import { channelLoadOhm } from '$lib/inventory/channel-plan';
+import { INVENTORY_EDITORS, INVENTORY_READERS } from '$lib/inventory/roles';
+import { requireRole } from '$lib/server/auth/guards';
+import { deleteOrExplain } from '$lib/server/inventory-pages';
+import { orHttpError } from '$lib/server/services/errors';
+import { listHistory } from '$lib/server/services/inventory-history';
+import { deletePackage, getLoadedPackage } from '$lib/server/services/inventory-packages';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, ...INVENTORY_READERS);
+	const id = Number(event.params.id);
+	const pkg = await orHttpError(() => getLoadedPackage(id));
+	return {
+		pkg,
+		loads: pkg.groups.map((g) => Math.round(channelLoadOhm(g) * 100) / 100),
+		bill: packageBillOfMaterials(pkg.groups),
+		history: await listHistory('package', id)
+	};
+};
+
+export const actions: Actions = {
+	delete: async (event) => {
+		requireRole(event, ...INVENTORY_EDITORS);
+		return deleteOrExplain(() => deletePackage(Number(event.params.id)), '/inventory/packages');
+	}
+};

@@ -1,0 +1,69 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
+import { api, sessionCookie } from './http';
+import { loudspeakerBody } from './inventory-helpers';
+
+let browser: Browser;
+let modelId: number;
+beforeAll(async () => {
+	browser = await launchBrowser();
+	const cookie = await sessionCookie('warehouse@kestrel-yard.test');
+	const created = await api('/api/loudspeakers', { cookie, method: 'POST', body: loudspeakerBody({ sensitivityDb: 96 }) });
+	modelId = created.json.id;
+});
+afterAll(async () => {
+	await browser?.close();
+});
+
+describe('inventory in the browser', () => {
+	it('a warehouse user edits a loudspeaker’s sensitivity and sees it in the spec history', async () => {
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, 'warehouse@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/inventory/loudspeakers/${modelId}`);
+		await page.getByRole('link', { name: 'Edit specification' }).click();
+		await page.waitForURL(`${BASE_URL}/inventory/loudspeakers/${modelId}/edit`);
+
+		// A value out of range is refused beside its field, and nothing is saved.
+		await page.getByLabel('Sensitivity (on axis, 1 m)').fill('150');
+		await page.getByRole('button', { name: 'Save changes' }).click();
+		await page.getByText('At most 120 dB').waitFor();
+
+		await page.getByLabel('Sensitivity (on axis, 1 m)').fill('98.5');
+		await page.getByRole('button', { name: 'Save changes' }).click();
+		await page.waitForURL(`${BASE_URL}/inventory/loudspeakers/${modelId}`);
+		const history = page.getByTestId('spec-history');
+		const row = history.getByRole('row').filter({ hasText: 'Sensitivity' });
+		await row.waitFor();
+		await expect(row.textContent()).resolves.toMatch(/Sam Ilunga.*Sensitivity \(dB\).*96\s*→\s*98\.5/s);
+		await screenshot(page, 'inventory-loudspeaker-history-1280');
+		await page.close();
+	});
+
+	it('sales sees the model but no edit controls', async () => {
+		const page = await browser.newPage();
+		await signIn(page, 'sales@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/inventory/loudspeakers/${modelId}`);
+		await page.getByTestId('spec-history').waitFor();
+		expect(await page.getByRole('link', { name: 'Edit specification' }).count()).toBe(0);
+		expect(await page.getByRole('button', { name: 'Upload' }).count()).toBe(0);
+		await page.close();
+	});
+
+	it('works on a phone: the tables scroll inside their box, the page never sideways', async () => {
+		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+		await signIn(page, 'warehouse@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		for (const path of ['/inventory/loudspeakers', '/inventory/units', `/inventory/loudspeakers/${modelId}/edit`, '/inventory/packages/new']) {
+			await page.goto(`${BASE_URL}${path}`);
+			await page.locator('main').waitFor();
+			const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+			expect({ path, overflow }).toEqual({ path, overflow: 0 });
+		}
+		await page.goto(`${BASE_URL}/inventory/loudspeakers`);
+		await screenshot(page, 'inventory-loudspeakers-390');
+		await page.close();
+	});
+});
