@@ -14,7 +14,8 @@ bash scripts/fakes.sh start
 # Build only when the sources changed since the last build.
 if [ ! -f build/index.js ] || [ -n "$(find src static svelte.config.js vite.config.ts tailwind.config.js package-lock.json -newer build/index.js -print -quit)" ]; then
 	echo "[start] building the app"
-	node node_modules/vite/bin/vite.js build --logLevel warn
+	# Builds share .svelte-kit/output: the lock keeps a concurrent test build from mixing in.
+	mkdir -p .data && flock .data/build.lock node node_modules/vite/bin/vite.js build --logLevel warn
 fi
 
 echo "[start] Throwline on $ORIGIN (stop with Ctrl-C; 'npm stop' also stops MariaDB and the fakes)"

@@ -17,6 +17,7 @@ step() { echo; echo "== $*"; }
 
 step "services"
 mkdir -p "$RUN_DIR"
+bash scripts/fakes.sh stop >/dev/null # fakes left from an earlier run would keep its state
 rm -rf "$MAIL_DIR" "$UPLOAD_DIR" "$RUN_DIR/stripe-state.json"
 bash scripts/db.sh start
 bash scripts/db.sh drop >/dev/null
@@ -32,7 +33,8 @@ step "unit and database tests"
 npx vitest run
 
 step "build"
-node node_modules/vite/bin/vite.js build --logLevel error
+# Builds share .svelte-kit/output: the lock keeps a concurrent npm start build from mixing in.
+mkdir -p .data && flock .data/build.lock node node_modules/vite/bin/vite.js build --logLevel error
 
 step "browser tests"
 node "$BUILD_DIR" >"$RUN_DIR/app.log" 2>&1 &

@@ -21,7 +21,12 @@ export interface NavItem {
 /** The app's main navigation; each entry is shown only to the roles that may open it. */
 export const NAVIGATION: readonly NavItem[] = [
 	{ href: '/', label: 'Overview', roles: ['admin', 'warehouse', 'sales', 'client'] },
-	{ href: '/admin/users', label: 'Users', roles: ['admin'] }
+	{ href: '/quotes', label: 'Quotes', roles: ['admin', 'sales', 'client'] },
+	{ href: '/bookings', label: 'Going out', roles: ['admin', 'warehouse', 'sales'] },
+	{ href: '/inventory', label: 'Inventory', roles: ['admin', 'warehouse', 'sales'] },
+	{ href: '/admin/users', label: 'Users', roles: ['admin'] },
+	{ href: '/admin/programmes', label: 'Programmes', roles: ['admin'] },
+	{ href: '/admin/settings', label: 'Settings', roles: ['admin'] }
 ];
 
 export function navigationFor(role: Role): NavItem[] {

@@ -36,7 +36,8 @@ export function createSequelize(config: DatabaseConfig): Sequelize {
 		timezone: '+00:00',
 		// Short timeouts so a stopped database turns into a quick 503, not a hung request.
 		dialectOptions: { connectTimeout: 3000, acquireTimeout: 5000 },
-		pool: { max: 10, min: 0, acquire: 5000, idle: 10_000 }
+		// Bookings racing for the same stock queue on row locks while holding a connection: allow a wait.
+		pool: { max: 20, min: 0, acquire: 20_000, idle: 10_000 }
 	});
 	initModels(sequelize);
 	return sequelize;

@@ -1,16 +1,36 @@
-import type { Transaction } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
+import { OPEN_STATUSES } from '$lib/quotes/states';
+import { Quote } from '../db/models';
+import { catalogueChanged } from './catalogue';
 
 export type SpecModelType = 'loudspeaker' | 'amplifier';
 
 /**
  * Called by the inventory services whenever a specification field the acoustic model uses changes.
- * Flags every open quote that used the model for a re-check and returns how many were flagged.
- * (Quotes arrive with the quoting work; until then there is nothing to flag.)
+ * Flags every open quote whose current version's package uses the model, so the desk re-checks it
+ * before sending; returns how many were flagged.
  */
 export async function flagQuotesForSpecChange(
-	_modelType: SpecModelType,
-	_modelId: number,
-	_transaction?: Transaction
+	modelType: SpecModelType,
+	modelId: number,
+	transaction?: Transaction
 ): Promise<number> {
-	return 0;
+	catalogueChanged();
+	const column = modelType === 'loudspeaker' ? 'loudspeakerModelId' : 'amplifierModelId';
+	const rows = await Quote.sequelize!.query<{ id: number }>(
+		`SELECT DISTINCT q.id FROM quotes q
+		   JOIN quote_versions v ON v.quoteId = q.id AND v.version = q.currentVersion
+		   JOIN package_groups g ON g.packageId = v.packageId
+		  WHERE q.status IN (:open) AND g.${column} = :modelId`,
+		{ type: QueryTypes.SELECT, replacements: { open: OPEN_STATUSES, modelId }, transaction }
+	);
+	if (rows.length === 0) return 0;
+	const [count] = await Quote.update(
+		{
+			needsRecheck: true,
+			recheckReason: `A ${modelType} specification used by this quote changed on ${new Date().toISOString().slice(0, 10)}.`
+		},
+		{ where: { id: rows.map((r) => r.id) }, transaction }
+	);
+	return count;
 }

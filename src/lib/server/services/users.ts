@@ -4,6 +4,7 @@ import type { Role } from '$lib/permissions';
 import type { UserCreateInput, UserUpdateInput } from '$lib/schemas/users';
 import { hashPassword } from '../auth/password';
 import { Client, User } from '../db/models';
+import { userChanged } from '../users';
 import { DomainError } from './errors';
 
 export interface UserRow {
@@ -89,6 +90,7 @@ export async function updateUser(actorId: number, id: number, changes: UserUpdat
 		});
 	}
 	await user.update({ ...changes, clientId });
+	userChanged();
 	await user.reload({ include: [{ model: Client, as: 'client' }] });
 	return toRow(user);
 }

@@ -1,8 +1,12 @@
 import type { Sequelize } from 'sequelize';
 import { Client } from './client';
 import { User } from './user';
+import { initQuotingModels } from './quoting';
+import { initInventoryModels } from './inventory';
 
 export { Client, User };
+export * from './quoting';
+export * from './inventory';
 
 /** Registers every model and association on one Sequelize instance. */
 export function initModels(sequelize: Sequelize): void {
@@ -11,4 +15,7 @@ export function initModels(sequelize: Sequelize): void {
 
 	Client.hasMany(User, { foreignKey: 'clientId', as: 'users' });
 	User.belongsTo(Client, { foreignKey: 'clientId', as: 'client' });
+
+	initInventoryModels(sequelize);
+	initQuotingModels(sequelize);
 }

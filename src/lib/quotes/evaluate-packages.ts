@@ -1,0 +1,124 @@
+/**
+ * Evaluates every package against one request: the acoustic verdict, the stock free on the hire
+ * dates, the hire price, and a level-versus-distance curve, then ranks them for the desk.
+ * Pure: the caller loads packages, stock counts and bookings.
+ */
+import { evaluatePackage, levelCurve, type Evaluation, type LevelPoint, type QuoteRequest } from '../acoustics';
+import { packageBillOfMaterials, toPackageSpec, type BillOfMaterials, type LoadedPackage } from '../inventory';
+import { checkAvailability, type ModelKey, type Reservation } from './availability';
+import { LIMITED_BY_LABELS } from './limits';
+import { priceHire, type Price, type PriceLineInput, type PriceSettings } from './pricing';
+import { rank, effectiveVerdict, type Verdict } from './ranking';
+import { chartDistances } from './request';
+
+export interface ShortfallLine {
+	modelType: 'loudspeaker' | 'amplifier';
+	modelId: number;
+	name: string;
+	needed: number;
+	available: number;
+	missing: number;
+}
+
+export interface PackageResult {
+	packageId: number;
+	packageName: string;
+	description: string;
+	/** The acoustic verdict, made `short` when the stock is not there on the dates. */
+	verdict: Verdict;
+	headroomDb: number;
+	limitedBy: string | null;
+	/** Set when the package could not be evaluated at all (e.g. a load below an amplifier's minimum). */
+	error: string | null;
+	evaluation: Evaluation | null;
+	availability: { ok: boolean; shortfalls: ShortfallLine[] };
+	price: Price;
+	billOfMaterials: BillOfMaterials;
+	curve: LevelPoint[];
+}
+
+export interface EvaluationContext {
+	request: QuoteRequest;
+	startDate: string;
+	endDate: string;
+	priceSettings: PriceSettings;
+	/** Ready units per model. */
+	inService: Partial<Record<ModelKey, number>>;
+	reservations: Reservation[];
+}
+
+export function priceLinesFor(pkg: LoadedPackage, bom: BillOfMaterials): PriceLineInput[] {
+	const rates = new Map<string, number>();
+	for (const g of pkg.groups) {
+		rates.set(`loudspeaker:${g.loudspeaker.id}`, g.loudspeaker.dayRateMinor);
+		rates.set(`amplifier:${g.amplifier.id}`, g.amplifier.dayRateMinor);
+	}
+	return [
+		...bom.loudspeakers.map((l) => ({ description: l.name, quantity: l.count, dayRateMinor: rates.get(`loudspeaker:${l.modelId}`)! })),
+		...bom.amplifiers.map((a) => ({ description: a.name, quantity: a.count, dayRateMinor: rates.get(`amplifier:${a.modelId}`)! }))
+	];
+}
+
+function neededUnits(bom: BillOfMaterials): Partial<Record<ModelKey, number>> {
+	const needed: Partial<Record<ModelKey, number>> = {};
+	for (const l of bom.loudspeakers) needed[`loudspeaker:${l.modelId}`] = l.count;
+	for (const a of bom.amplifiers) needed[`amplifier:${a.modelId}`] = a.count;
+	return needed;
+}
+
+function limitLabel(evaluation: Evaluation | null, available: boolean): string | null {
+	if (!available) return LIMITED_BY_LABELS.availability;
+	if (!evaluation) return null;
+	if (evaluation.verdict !== 'short' && evaluation.boundary && evaluation.boundary.marginDb < 0) {
+		return LIMITED_BY_LABELS.boundary;
+	}
+	return evaluation.limitedBy ? LIMITED_BY_LABELS[evaluation.limitedBy] : null;
+}
+
+export function evaluateOne(pkg: LoadedPackage, ctx: EvaluationContext): PackageResult {
+	const bom = packageBillOfMaterials(pkg.groups);
+	const names = new Map<ModelKey, string>([
+		...bom.loudspeakers.map((l) => [`loudspeaker:${l.modelId}`, l.name] as [ModelKey, string]),
+		...bom.amplifiers.map((a) => [`amplifier:${a.modelId}`, a.name] as [ModelKey, string])
+	]);
+	const stock = checkAvailability(neededUnits(bom), ctx.inService, ctx.reservations, ctx.startDate, ctx.endDate);
+	const shortfalls = stock.shortfalls.map((s) => {
+		const [modelType, id] = s.model.split(':') as ['loudspeaker' | 'amplifier', string];
+		return { modelType, modelId: Number(id), name: names.get(s.model) ?? s.model, needed: s.needed, available: s.available, missing: s.missing };
+	});
+	const price = priceHire(priceLinesFor(pkg, bom), ctx.startDate, ctx.endDate, ctx.priceSettings);
+
+	let evaluation: Evaluation | null = null;
+	let curve: LevelPoint[] = [];
+	let error: string | null = null;
+	try {
+		const spec = toPackageSpec(pkg);
+		evaluation = evaluatePackage(spec, ctx.request);
+		curve = levelCurve(spec, ctx.request, chartDistances(ctx.request));
+	} catch (err) {
+		error = (err as Error).message;
+	}
+	const acoustic: Verdict = evaluation?.verdict ?? 'short';
+	return {
+		packageId: pkg.id,
+		packageName: pkg.name,
+		description: pkg.description,
+		verdict: effectiveVerdict({ verdict: acoustic, available: stock.ok }),
+		headroomDb: evaluation?.headroomDb ?? -Infinity,
+		limitedBy: error ? 'cannot be evaluated' : limitLabel(evaluation, stock.ok),
+		error,
+		evaluation,
+		availability: { ok: stock.ok, shortfalls },
+		price,
+		billOfMaterials: bom,
+		curve
+	};
+}
+
+/** Every package, ranked clear → tight → short, then by price. */
+export function evaluatePackages(packages: LoadedPackage[], ctx: EvaluationContext): PackageResult[] {
+	const results = packages.map((pkg) => evaluateOne(pkg, ctx));
+	return rank(
+		results.map((r) => ({ ...r, available: r.availability.ok, totalMinor: r.price.totalMinor, name: r.packageName }))
+	).map(({ available: _a, totalMinor: _t, name: _n, ...r }) => r);
+}

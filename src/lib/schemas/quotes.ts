@@ -1,0 +1,137 @@
+import { z } from 'zod';
+import { QUOTE_ACTIONS } from '../quotes/states';
+import { evaluationRequestSchema, type QuoteRequestInput } from './evaluation';
+
+export const newClientSchema = z.object({
+	name: z.string().trim().min(2, 'Enter the organisation’s name').max(160),
+	contactName: z.string().trim().min(2, 'Enter a contact name').max(120),
+	email: z.string().trim().toLowerCase().max(254).pipe(z.email('Enter a valid e-mail address')),
+	phone: z.string().trim().max(40).optional()
+});
+
+const quoteFields = {
+	eventName: z.string().trim().min(2, 'Name the event').max(160),
+	packageId: z.number().int().positive({ error: 'Choose a package' }),
+	notes: z.string().trim().max(4000).optional(),
+	request: evaluationRequestSchema
+};
+
+/** API body for a new quote: an existing client by id, or a new one. */
+export const quoteCreateSchema = z
+	.object({
+		clientId: z.number().int().positive().optional(),
+		newClient: newClientSchema.optional(),
+		...quoteFields
+	})
+	.refine((q) => (q.clientId === undefined) !== (q.newClient === undefined), {
+		path: ['clientId'],
+		message: 'Choose an existing client or enter a new one'
+	});
+export type QuoteCreateInput = z.infer<typeof quoteCreateSchema>;
+
+/** A revision keeps the client; everything else may change. */
+export const quoteReviseSchema = z.object(quoteFields);
+export type QuoteReviseInput = z.infer<typeof quoteReviseSchema>;
+
+export const quoteActionSchema = z.object({ action: z.enum(QUOTE_ACTIONS, { error: 'Unknown action' }) });
+
+// ---- The desk's request form: flat fields so it works without JavaScript and names map to inputs.
+
+const optionalNumber = z.number().nullable().default(null);
+
+export const requestFormSchema = z.object({
+	clientId: z.number().int().positive().nullable().default(null),
+	newClientName: z.string().trim().max(160).default(''),
+	newClientContact: z.string().trim().max(120).default(''),
+	newClientEmail: z.string().trim().max(254).default(''),
+	eventName: z.string().trim().max(160).default(''),
+	startDate: z.string().default(''),
+	endDate: z.string().default(''),
+	targetDb: z.number().default(100),
+	weighting: z.enum(['A', 'C', 'Z']).default('A'),
+	distance: z.number().default(30),
+	distanceUnit: z.enum(['m', 'ft']).default('m'),
+	audienceWidth: optionalNumber,
+	programme: z.string().default('pop-rock'),
+	temperatureC: z.number().default(20),
+	humidityPct: z.number().default(50),
+	marginDb: optionalNumber,
+	boundaryEnabled: z.boolean().default(false),
+	boundaryDistance: optionalNumber,
+	boundaryLimitDb: optionalNumber,
+	boundaryWeighting: z.enum(['A', 'C', 'Z']).default('A'),
+	notes: z.string().max(4000).default(''),
+	packageId: z.number().int().positive().nullable().default(null)
+});
+export type RequestForm = z.infer<typeof requestFormSchema>;
+
+/** The evaluation body the form describes (not yet validated). */
+export function evaluationBodyFromForm(f: RequestForm): Record<string, unknown> {
+	return {
+		targetDb: f.targetDb,
+		weighting: f.weighting,
+		distance: f.distance,
+		distanceUnit: f.distanceUnit,
+		...(f.audienceWidth !== null ? { audienceWidth: f.audienceWidth } : {}),
+		programme: f.programme,
+		temperatureC: f.temperatureC,
+		humidityPct: f.humidityPct,
+		...(f.marginDb !== null ? { marginDb: f.marginDb } : {}),
+		...(f.boundaryEnabled
+			? { boundary: { distance: f.boundaryDistance, limitDb: f.boundaryLimitDb, weighting: f.boundaryWeighting } }
+			: {}),
+		startDate: f.startDate,
+		endDate: f.endDate
+	};
+}
+
+/** Where an API error path lands in the flat form. */
+export function formFieldOf(path: string): keyof RequestForm | null {
+	const map: Record<string, keyof RequestForm> = {
+		'boundary.distance': 'boundaryDistance',
+		'boundary.limitDb': 'boundaryLimitDb',
+		'boundary.weighting': 'boundaryWeighting',
+		'request.boundary.distance': 'boundaryDistance',
+		'request.boundary.limitDb': 'boundaryLimitDb',
+		'newClient.name': 'newClientName',
+		'newClient.contactName': 'newClientContact',
+		'newClient.email': 'newClientEmail'
+	};
+	if (map[path]) return map[path];
+	const last = path.replace(/^request\./, '');
+	return last in requestFormSchema.shape ? (last as keyof RequestForm) : null;
+}
+
+/** The request form as a quote body for the API (validated by quoteCreateSchema). */
+export function quoteBodyFromForm(f: RequestForm): Record<string, unknown> {
+	return {
+		...(f.clientId !== null
+			? { clientId: f.clientId }
+			: { newClient: { name: f.newClientName, contactName: f.newClientContact, email: f.newClientEmail } }),
+		eventName: f.eventName,
+		packageId: f.packageId ?? 0,
+		...(f.notes ? { notes: f.notes } : {}),
+		request: evaluationBodyFromForm(f)
+	};
+}
+
+/** A saved request back into the form, for revising a quote. */
+export function formFromRequest(request: QuoteRequestInput): Partial<RequestForm> {
+	return {
+		targetDb: request.targetDb,
+		weighting: request.weighting,
+		distance: request.distance,
+		distanceUnit: request.distanceUnit,
+		audienceWidth: request.audienceWidth ?? null,
+		programme: request.programme,
+		temperatureC: request.temperatureC,
+		humidityPct: request.humidityPct,
+		marginDb: request.marginDb ?? null,
+		boundaryEnabled: request.boundary !== undefined,
+		boundaryDistance: request.boundary?.distance ?? null,
+		boundaryLimitDb: request.boundary?.limitDb ?? null,
+		boundaryWeighting: request.boundary?.weighting ?? 'A',
+		startDate: request.startDate,
+		endDate: request.endDate
+	};
+}

@@ -1,0 +1,26 @@
+/**
+ * A small in-process cache for data that changes rarely and is read on every evaluation (the
+ * catalogue, settings, programme profiles). Entries live a few seconds at most and are dropped at
+ * once by the writes that change them, so one app process never serves a stale spec after its own
+ * edit; several processes would agree within the time-to-live.
+ */
+const TTL_MS = 5000;
+
+/** Key prefix of the quoting engine's view of packages and models. */
+export const CATALOGUE = 'catalogue:';
+const entries = new Map<string, { expires: number; value: Promise<unknown> }>();
+
+export function cached<T>(key: string, load: () => Promise<T>): Promise<T> {
+	const now = Date.now();
+	const hit = entries.get(key);
+	if (hit && hit.expires > now) return hit.value as Promise<T>;
+	const value = load();
+	entries.set(key, { expires: now + TTL_MS, value });
+	value.catch(() => entries.delete(key)); // never keep a failure
+	return value;
+}
+
+/** Drops every entry whose key starts with the prefix (e.g. "catalogue:"). */
+export function invalidate(prefix: string): void {
+	for (const key of entries.keys()) if (key.startsWith(prefix)) entries.delete(key);
+}

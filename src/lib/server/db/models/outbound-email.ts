@@ -1,0 +1,44 @@
+import {
+	DataTypes,
+	Model,
+	type CreationOptional,
+	type InferAttributes,
+	type InferCreationAttributes,
+	type Sequelize
+} from 'sequelize';
+
+/** An e-mail written before it is sent, so a mail-server outage delays it but never loses it. */
+export class OutboundEmail extends Model<InferAttributes<OutboundEmail>, InferCreationAttributes<OutboundEmail>> {
+	declare id: CreationOptional<number>;
+	declare toAddress: string;
+	declare subject: string;
+	declare textBody: string;
+	declare htmlBody: CreationOptional<string | null>;
+	declare status: CreationOptional<'pending' | 'sent' | 'failed'>;
+	declare attempts: CreationOptional<number>;
+	declare lastError: CreationOptional<string | null>;
+	declare quoteId: CreationOptional<number | null>;
+	declare sentAt: CreationOptional<Date | null>;
+	declare createdAt: CreationOptional<Date>;
+	declare updatedAt: CreationOptional<Date>;
+
+	static initModel(sequelize: Sequelize) {
+		OutboundEmail.init(
+			{
+				id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+				toAddress: { type: DataTypes.STRING(254), allowNull: false },
+				subject: { type: DataTypes.STRING(200), allowNull: false },
+				textBody: { type: DataTypes.TEXT, allowNull: false },
+				htmlBody: { type: DataTypes.TEXT, allowNull: true },
+				status: { type: DataTypes.ENUM('pending', 'sent', 'failed'), allowNull: false, defaultValue: 'pending' },
+				attempts: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+				lastError: { type: DataTypes.STRING(500), allowNull: true },
+				quoteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+				sentAt: { type: DataTypes.DATE, allowNull: true },
+				createdAt: DataTypes.DATE,
+				updatedAt: DataTypes.DATE
+			},
+			{ sequelize, tableName: 'outbound_emails' }
+		);
+	}
+}

@@ -1,0 +1,50 @@
+import {
+	DataTypes,
+	Model,
+	type CreationOptional,
+	type InferAttributes,
+	type InferCreationAttributes,
+	type Sequelize
+} from 'sequelize';
+import type { PackageResult } from '../../../quotes/evaluate-packages';
+import type { Price } from '../../../quotes/pricing';
+import type { QuoteRequestInput } from '../../../schemas/evaluation';
+
+/** One saved state of a quote: the request, the chosen package and the snapshot it was priced on. */
+export class QuoteVersion extends Model<InferAttributes<QuoteVersion>, InferCreationAttributes<QuoteVersion>> {
+	declare id: CreationOptional<number>;
+	declare quoteId: number;
+	declare version: number;
+	declare packageId: number;
+	declare startDate: string;
+	declare endDate: string;
+	declare request: QuoteRequestInput;
+	/** The chosen package's full result at the time: verdict, bands, boundary, stock, curve. */
+	declare evaluation: PackageResult;
+	declare price: Price;
+	declare notes: CreationOptional<string | null>;
+	declare createdById: number;
+	declare createdAt: CreationOptional<Date>;
+	declare updatedAt: CreationOptional<Date>;
+
+	static initModel(sequelize: Sequelize) {
+		QuoteVersion.init(
+			{
+				id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+				quoteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+				version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+				packageId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+				startDate: { type: DataTypes.DATEONLY, allowNull: false },
+				endDate: { type: DataTypes.DATEONLY, allowNull: false },
+				request: { type: DataTypes.JSON, allowNull: false },
+				evaluation: { type: DataTypes.JSON, allowNull: false },
+				price: { type: DataTypes.JSON, allowNull: false },
+				notes: { type: DataTypes.TEXT, allowNull: true },
+				createdById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+				createdAt: DataTypes.DATE,
+				updatedAt: DataTypes.DATE
+			},
+			{ sequelize, tableName: 'quote_versions' }
+		);
+	}
+}

@@ -1,0 +1,50 @@
+import {
+	DataTypes,
+	Model,
+	type CreationOptional,
+	type InferAttributes,
+	type InferCreationAttributes,
+	type Sequelize
+} from 'sequelize';
+import { QUOTE_STATUSES, type QuoteStatus } from '../../../quotes/states';
+
+export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes<Quote>> {
+	declare id: CreationOptional<number>;
+	declare clientId: number;
+	declare eventName: string;
+	declare status: CreationOptional<QuoteStatus>;
+	declare currentVersion: CreationOptional<number>;
+	/** Set when a spec change touched a model this quote's package uses. */
+	declare needsRecheck: CreationOptional<boolean>;
+	declare recheckReason: CreationOptional<string | null>;
+	/** Set when a paid deposit could not become a booking (the stock went to another hire). */
+	declare bookingIssue: CreationOptional<string | null>;
+	declare createdById: number;
+	declare sentAt: CreationOptional<Date | null>;
+	declare acceptedAt: CreationOptional<Date | null>;
+	declare cancelledAt: CreationOptional<Date | null>;
+	declare createdAt: CreationOptional<Date>;
+	declare updatedAt: CreationOptional<Date>;
+
+	static initModel(sequelize: Sequelize) {
+		Quote.init(
+			{
+				id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+				clientId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+				eventName: { type: DataTypes.STRING(160), allowNull: false },
+				status: { type: DataTypes.ENUM(...QUOTE_STATUSES), allowNull: false, defaultValue: 'draft' },
+				currentVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
+				needsRecheck: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+				recheckReason: { type: DataTypes.STRING(500), allowNull: true },
+				bookingIssue: { type: DataTypes.STRING(500), allowNull: true },
+				createdById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+				sentAt: { type: DataTypes.DATE, allowNull: true },
+				acceptedAt: { type: DataTypes.DATE, allowNull: true },
+				cancelledAt: { type: DataTypes.DATE, allowNull: true },
+				createdAt: DataTypes.DATE,
+				updatedAt: DataTypes.DATE
+			},
+			{ sequelize, tableName: 'quotes' }
+		);
+	}
+}

@@ -1,0 +1,32 @@
+import { formatMoney } from '$lib/quotes/pricing';
+import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, moneyLines } from '$lib/quotes/plain-language';
+import type { QuoteDetail } from '../services/quotes';
+import type { EmailMessage } from './outbox';
+import { publicOrigin } from './transport';
+
+const escapeHtml = (s: string) =>
+	s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+
+/** The quote e-mail: a plain-language summary and a sign-in link that lands on the quote. */
+export function quoteSentEmail(quote: QuoteDetail, to: string, companyName: string): EmailMessage {
+	const link = `${publicOrigin()}/signin?redirectTo=${encodeURIComponent(`/quotes/${quote.id}`)}`;
+	const boundary = boundarySentence(quote.result, quote.request);
+	const paragraphs = [
+		`Here is our quote ${quote.reference} for ${quote.eventName}, ${quote.startDate} to ${quote.endDate}.`,
+		`We propose "${quote.packageName}" to give ${levelPromise(quote.request)}. ${headroomSentence(quote.result)}`,
+		...(boundary ? [boundary] : []),
+		moneyLines(quote.result).map((l) => `${l.label}: ${l.value}`).join('\n'),
+		`Read the full quote, accept it and pay the deposit here (sign in with this e-mail address):\n${link}`,
+		CLIENT_CAUTIONS.join('\n')
+	];
+	const html = `<div style="font-family:system-ui,sans-serif;color:#1b2a33;max-width:36rem">${paragraphs
+		.map((p) => `<p>${escapeHtml(p).replace(/\n/g, '<br>')}</p>`)
+		.join('')}<p><a href="${escapeHtml(link)}" style="color:#1f5c63">Open quote ${quote.reference}</a></p></div>`;
+	return {
+		to,
+		subject: `Quote ${quote.reference} for ${quote.eventName} — ${formatMoney(quote.totalMinor, quote.currency)} from ${companyName}`,
+		text: `${paragraphs.join('\n\n')}\n\n${companyName}`,
+		html,
+		quoteId: quote.id
+	};
+}

@@ -1,0 +1,55 @@
+/** Shared by the new-quote and revise pages: what the request form needs, and saving it. */
+import { fail, redirect, type ActionFailure } from '@sveltejs/kit';
+import { setError, superValidate, type SuperValidated } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import type { z } from 'zod';
+import { formFieldOf, requestFormSchema, type RequestForm } from '$lib/schemas/quotes';
+import { Client } from '../db';
+import type { SessionUser } from '../users';
+import { DomainError } from './errors';
+import { listProgrammes } from './programmes';
+import { getSettings } from './settings';
+
+export async function requestFormOptions() {
+	const [clients, programmes, settings] = await Promise.all([
+		Client.findAll({ attributes: ['id', 'name'], order: [['name', 'ASC']] }),
+		listProgrammes(),
+		getSettings()
+	]);
+	return {
+		clients: clients.map((c) => ({ id: c.id, name: c.name })),
+		programmes: programmes.map((p) => ({ slug: p.slug, name: p.name, crestFactorDb: p.crestFactorDb, isTypical: p.isTypical })),
+		defaultMarginDb: settings.defaultMarginDb,
+		distanceUnit: settings.distanceUnit
+	};
+}
+
+/** Validates the flat form as an API body; puts every problem on the field it belongs to. */
+export async function saveFromForm<S extends z.ZodType>(
+	request: Request,
+	bodySchema: S,
+	toBody: (form: RequestForm) => Record<string, unknown>,
+	save: (input: z.output<S>) => Promise<{ id: number }>
+): Promise<ActionFailure<{ form: SuperValidated<RequestForm> }>> {
+	const form = await superValidate(request, zod4(requestFormSchema));
+	if (!form.valid) return fail(400, { form });
+	const parsed = bodySchema.safeParse(toBody(form.data));
+	if (!parsed.success) {
+		for (const issue of parsed.error.issues) {
+			const field = formFieldOf(issue.path.join('.'));
+			setError(form, field ?? '', issue.message);
+		}
+		return fail(422, { form });
+	}
+	let id: number;
+	try {
+		id = (await save(parsed.data)).id;
+	} catch (err) {
+		if (!(err instanceof DomainError)) throw err;
+		const [path, messages] = Object.entries(err.errors ?? {})[0] ?? [];
+		return setError(form, (path && formFieldOf(path)) || '', messages?.[0] ?? err.message, { status: err.status });
+	}
+	redirect(303, `/quotes/${id}`);
+}
+
+export type { SessionUser };

@@ -1,0 +1,202 @@
+/** Saving and reading quotes. A quote keeps every version; each version snapshots what was priced. */
+import type { Transaction } from 'sequelize';
+import type { PackageResult } from '$lib/quotes/evaluate-packages';
+import { isEditable, type QuoteStatus } from '$lib/quotes/states';
+import type { QuoteCreateInput, QuoteReviseInput } from '$lib/schemas/quotes';
+import type { QuoteRequestInput } from '$lib/schemas/evaluation';
+import { quoteReference } from '$lib/quotes/reference';
+import { db, Client, OutboundEmail, Quote, QuoteVersion } from '../db';
+import { invoicesFor, type InvoiceRow } from './invoice-rows';
+import type { SessionUser } from '../users';
+import { DomainError } from './errors';
+import { evaluateForDesk } from './evaluations';
+
+export interface QuoteSummary {
+	id: number;
+	reference: string;
+	eventName: string;
+	status: QuoteStatus;
+	clientId: number;
+	clientName: string;
+	startDate: string;
+	endDate: string;
+	packageName: string;
+	verdict: string;
+	totalMinor: number;
+	currency: string;
+	needsRecheck: boolean;
+	updatedAt: string;
+}
+
+export interface QuoteDetail extends QuoteSummary {
+	version: number;
+	request: QuoteRequestInput;
+	result: PackageResult;
+	notes: string | null;
+	recheckReason: string | null;
+	versions: { version: number; createdAt: string; packageName: string; totalMinor: number }[];
+	emails: { id: number; toAddress: string; subject: string; status: string; createdAt: string; lastError: string | null }[];
+	sentAt: string | null;
+	acceptedAt: string | null;
+	invoices: InvoiceRow[];
+	/** Set when a paid deposit could not become a booking: the desk must act. */
+	bookingIssue: string | null;
+}
+
+/** Prices and evaluates one package for the request now; a refusal to quote is a 422 on packageId. */
+async function snapshot(request: QuoteRequestInput, packageId: number, quoteId?: number): Promise<PackageResult> {
+	const { results } = await evaluateForDesk(request, { packageIds: [packageId], excludeQuoteId: quoteId });
+	if (results.length === 0) {
+		throw new DomainError(422, 'That package is not available for quoting.', { packageId: ['Choose an active package'] });
+	}
+	return results[0];
+}
+
+async function clientFor(input: QuoteCreateInput, transaction: Transaction): Promise<number> {
+	if (input.clientId !== undefined) {
+		const client = await Client.findByPk(input.clientId, { transaction });
+		if (!client) throw new DomainError(422, 'No such client.', { clientId: ['Choose an existing client'] });
+		return client.id;
+	}
+	const { name, contactName, email, phone } = input.newClient!;
+	const [client] = await Client.findOrCreate({
+		where: { email },
+		defaults: { name, contactName, email, phone: phone ?? null },
+		transaction
+	});
+	return client.id;
+}
+
+export async function createQuote(input: QuoteCreateInput, actor: SessionUser): Promise<QuoteDetail> {
+	const result = await snapshot(input.request, input.packageId);
+	const quoteId = await db().transaction(async (transaction) => {
+		const clientId = await clientFor(input, transaction);
+		const quote = await Quote.create({ clientId, eventName: input.eventName, createdById: actor.id }, { transaction });
+		await writeVersion(quote.id, 1, input, result, actor, transaction);
+		return quote.id;
+	});
+	return getQuote(quoteId, actor);
+}
+
+/** Saves the edited request as a new version; a sent quote goes back to draft until sent again. */
+export async function reviseQuote(id: number, input: QuoteReviseInput, actor: SessionUser): Promise<QuoteDetail> {
+	const result = await snapshot(input.request, input.packageId, id);
+	await db().transaction(async (transaction) => {
+		const quote = await Quote.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+		if (!quote) throw new DomainError(404, 'No such quote.');
+		if (!isEditable(quote.status)) {
+			throw new DomainError(409, `A quote that is ${quote.status} can no longer be edited.`);
+		}
+		const version = quote.currentVersion + 1;
+		await writeVersion(id, version, input, result, actor, transaction);
+		await quote.update(
+			{ currentVersion: version, status: 'draft', eventName: input.eventName, needsRecheck: false, recheckReason: null },
+			{ transaction }
+		);
+	});
+	return getQuote(id, actor);
+}
+
+async function writeVersion(
+	quoteId: number,
+	version: number,
+	input: QuoteReviseInput,
+	result: PackageResult,
+	actor: SessionUser,
+	transaction: Transaction
+) {
+	await QuoteVersion.create(
+		{
+			quoteId,
+			version,
+			packageId: input.packageId,
+			startDate: input.request.startDate,
+			endDate: input.request.endDate,
+			request: input.request,
+			evaluation: result,
+			price: result.price,
+			notes: input.notes ?? null,
+			createdById: actor.id
+		},
+		{ transaction }
+	);
+}
+
+/** Clients see only their organisation's quotes; anyone else's is reported as not found. */
+function visibleTo(actor: SessionUser): { clientId?: number } {
+	if (actor.role !== 'client') return {};
+	return { clientId: actor.clientId ?? -1 };
+}
+
+function summaryOf(quote: Quote & { client?: Client; versions?: QuoteVersion[] }): QuoteSummary {
+	const current = quote.versions!.find((v) => v.version === quote.currentVersion)!;
+	return {
+		id: quote.id,
+		reference: quoteReference(quote.id),
+		eventName: quote.eventName,
+		status: quote.status,
+		clientId: quote.clientId,
+		clientName: quote.client?.name ?? '',
+		startDate: current.startDate,
+		endDate: current.endDate,
+		packageName: current.evaluation.packageName,
+		verdict: current.evaluation.verdict,
+		totalMinor: current.price.totalMinor,
+		currency: current.price.currency,
+		needsRecheck: quote.needsRecheck,
+		updatedAt: quote.updatedAt.toISOString()
+	};
+}
+
+export async function listQuotes(actor: SessionUser): Promise<QuoteSummary[]> {
+	const quotes = await Quote.findAll({
+		where: visibleTo(actor),
+		include: [
+			{ model: Client, as: 'client', attributes: ['name'] },
+			{ model: QuoteVersion, as: 'versions' }
+		],
+		order: [['updatedAt', 'DESC']]
+	});
+	return quotes.map((q) => summaryOf(q));
+}
+
+export async function getQuote(id: number, actor: SessionUser): Promise<QuoteDetail> {
+	const quote = await Quote.findOne({
+		where: { id, ...visibleTo(actor) },
+		include: [
+			{ model: Client, as: 'client', attributes: ['name'] },
+			{ model: QuoteVersion, as: 'versions' }
+		],
+		order: [[{ model: QuoteVersion, as: 'versions' }, 'version', 'DESC']]
+	});
+	if (!quote) throw new DomainError(404, 'No such quote.');
+	const versions = (quote as Quote & { versions: QuoteVersion[] }).versions;
+	const current = versions.find((v) => v.version === quote.currentVersion)!;
+	const emails = actor.role === 'client' ? [] : await OutboundEmail.findAll({ where: { quoteId: id }, order: [['id', 'DESC']] });
+	return {
+		...summaryOf(quote),
+		version: current.version,
+		request: current.request,
+		result: current.evaluation,
+		notes: current.notes,
+		recheckReason: quote.recheckReason,
+		versions: versions.map((v) => ({
+			version: v.version,
+			createdAt: v.createdAt.toISOString(),
+			packageName: v.evaluation.packageName,
+			totalMinor: v.price.totalMinor
+		})),
+		emails: emails.map((e) => ({
+			id: e.id,
+			toAddress: e.toAddress,
+			subject: e.subject,
+			status: e.status,
+			createdAt: e.createdAt.toISOString(),
+			lastError: e.lastError
+		})),
+		sentAt: quote.sentAt?.toISOString() ?? null,
+		acceptedAt: quote.acceptedAt?.toISOString() ?? null,
+		invoices: await invoicesFor(id),
+		bookingIssue: actor.role === 'client' ? null : quote.bookingIssue
+	};
+}

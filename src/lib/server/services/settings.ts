@@ -1,0 +1,63 @@
+import type { SettingsInput } from '$lib/schemas/programmes';
+import type { PriceSettings } from '$lib/quotes/pricing';
+import { cached, invalidate } from '../cache';
+import { CompanySettings } from '../db/models';
+
+export interface Settings {
+	companyName: string;
+	currency: string;
+	taxRateBp: number;
+	depositBp: number;
+	pricingRule: PriceSettings['rule'];
+	defaultMarginDb: number;
+	distanceUnit: 'm' | 'ft';
+	paymentTermsDays: number;
+	cancellationFullRefundDays: number;
+}
+
+// Used until an admin saves settings (a fresh install before seeding).
+const DEFAULTS: Settings = {
+	companyName: 'Our hire company',
+	currency: 'GBP',
+	taxRateBp: 2000,
+	depositBp: 3000,
+	pricingRule: 'daily',
+	defaultMarginDb: 3,
+	distanceUnit: 'm',
+	paymentTermsDays: 14,
+	cancellationFullRefundDays: 28
+};
+
+export function getSettings(): Promise<Settings> {
+	return cached('settings', loadSettings);
+}
+
+async function loadSettings(): Promise<Settings> {
+	const row = await CompanySettings.findByPk(1);
+	if (!row) return { ...DEFAULTS };
+	const { id: _id, createdAt: _c, updatedAt: _u, ...settings } = row.get({ plain: true });
+	return settings;
+}
+
+export async function updateSettings(input: SettingsInput): Promise<Settings> {
+	const { taxRatePct, depositPct, ...rest } = input;
+	const values = { ...rest, taxRateBp: Math.round(taxRatePct * 100), depositBp: Math.round(depositPct * 100) };
+	await CompanySettings.upsert({ id: 1, ...values });
+	invalidate('settings');
+	return getSettings();
+}
+
+export function priceSettingsOf(settings: Settings): PriceSettings {
+	return {
+		rule: settings.pricingRule,
+		taxRateBp: settings.taxRateBp,
+		depositBp: settings.depositBp,
+		currency: settings.currency
+	};
+}
+
+/** The form shows percentages; the database keeps basis points. */
+export function settingsForForm(settings: Settings): SettingsInput {
+	const { taxRateBp, depositBp, ...rest } = settings;
+	return { ...rest, taxRatePct: taxRateBp / 100, depositPct: depositBp / 100 };
+}

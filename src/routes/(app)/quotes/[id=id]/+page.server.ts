@@ -1,0 +1,45 @@
+import { fail } from '@sveltejs/kit';
+import { allowedActions, type QuoteAction } from '$lib/quotes/states';
+import { requireRole } from '$lib/server/auth/guards';
+import { DomainError, orHttpError } from '$lib/server/services/errors';
+import { applyQuoteAction } from '$lib/server/services/quote-actions';
+import { invoiceBalance } from '$lib/server/services/balance';
+import { getQuote } from '$lib/server/services/quotes';
+import type { Actions, PageServerLoad, RequestEvent } from './$types';
+
+export const load: PageServerLoad = async (event) => {
+	const user = requireRole(event, 'admin', 'sales', 'client');
+	event.depends('app:quotes');
+	const quote = await orHttpError(() => getQuote(Number(event.params.id), user));
+	return { quote, actions: allowedActions(quote.status) };
+};
+
+function act(action: QuoteAction) {
+	return async (event: RequestEvent) => {
+		const user = requireRole(event, 'admin', 'sales', 'client');
+		try {
+			const outcome = await applyQuoteAction(Number(event.params.id), action, user);
+			return { done: action, mailSent: outcome.mailSent ?? null };
+		} catch (err) {
+			if (err instanceof DomainError) return fail(err.status, { actionError: err.message });
+			throw err;
+		}
+	};
+}
+
+export const actions: Actions = {
+	send: act('send'),
+	accept: act('accept'),
+	cancel: act('cancel'),
+	close: act('close'),
+	balance: async (event) => {
+		const user = requireRole(event, 'admin', 'sales');
+		try {
+			const outcome = await invoiceBalance(Number(event.params.id), user);
+			return { done: 'balance', mailSent: outcome.mailSent };
+		} catch (err) {
+			if (err instanceof DomainError) return fail(err.status, { actionError: err.message });
+			throw err;
+		}
+	}
+};

@@ -1,0 +1,39 @@
+import { error } from '@sveltejs/kit';
+import { superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { isEditable } from '$lib/quotes/states';
+import { requireRole } from '$lib/server/auth/guards';
+import { evaluationBodyFromForm, formFromRequest, quoteReviseSchema, requestFormSchema } from '$lib/schemas/quotes';
+import { orHttpError } from '$lib/server/services/errors';
+import { requestFormOptions, saveFromForm } from '$lib/server/services/quote-form';
+import { getQuote, reviseQuote } from '$lib/server/services/quotes';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async (event) => {
+	const user = requireRole(event, 'sales', 'admin');
+	const quote = await orHttpError(() => getQuote(Number(event.params.id), user));
+	if (!isEditable(quote.status)) error(409, { message: `A quote that is ${quote.status} can no longer be edited.` });
+	const values = {
+		...formFromRequest(quote.request),
+		clientId: quote.clientId,
+		eventName: quote.eventName,
+		notes: quote.notes ?? '',
+		packageId: quote.result.packageId
+	};
+	const form = await superValidate(values, zod4(requestFormSchema), { errors: false });
+	return { form, quote: { id: quote.id, reference: quote.reference, clientName: quote.clientName }, ...(await requestFormOptions()) };
+};
+
+export const actions: Actions = {
+	save: async (event) => {
+		const user = requireRole(event, 'sales', 'admin');
+		const id = Number(event.params.id);
+		const toBody = (f: Parameters<typeof evaluationBodyFromForm>[0]) => ({
+			eventName: f.eventName,
+			packageId: f.packageId ?? 0,
+			...(f.notes ? { notes: f.notes } : {}),
+			request: evaluationBodyFromForm(f)
+		});
+		return saveFromForm(event.request, quoteReviseSchema, toBody, (input) => reviseQuote(id, input, user));
+	}
+};

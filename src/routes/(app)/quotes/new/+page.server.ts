@@ -1,0 +1,34 @@
+import { superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { requireRole } from '$lib/server/auth/guards';
+import { quoteBodyFromForm, quoteCreateSchema, requestFormSchema } from '$lib/schemas/quotes';
+import { requestFormOptions, saveFromForm } from '$lib/server/services/quote-form';
+import { createQuote } from '$lib/server/services/quotes';
+import type { Actions, PageServerLoad } from './$types';
+
+/** The next Saturday, a sensible first guess for an event date. */
+function nextSaturday(): string {
+	const d = new Date();
+	d.setUTCDate(d.getUTCDate() + ((6 - d.getUTCDay() + 7) % 7 || 7));
+	return d.toISOString().slice(0, 10);
+}
+
+export const load: PageServerLoad = async (event) => {
+	requireRole(event, 'sales', 'admin');
+	const options = await requestFormOptions();
+	const date = nextSaturday();
+	const clientId = Number(event.url.searchParams.get('client')) || null;
+	const form = await superValidate(
+		{ startDate: date, endDate: date, distanceUnit: options.distanceUnit, clientId },
+		zod4(requestFormSchema),
+		{ errors: false }
+	);
+	return { form, ...options };
+};
+
+export const actions: Actions = {
+	save: async (event) => {
+		const user = requireRole(event, 'sales', 'admin');
+		return saveFromForm(event.request, quoteCreateSchema, quoteBodyFromForm, (input) => createQuote(input, user));
+	}
+};

@@ -1,0 +1,126 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { waitForMail } from '../fakes/mailbox';
+import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
+import { api, sessionCookie } from './http';
+
+let browser: Browser;
+beforeAll(async () => {
+	browser = await launchBrowser();
+});
+afterAll(async () => {
+	await browser?.close();
+});
+
+const CLIENT_EMAIL = 'organiser@millbrook-riverside.test';
+
+describe('the desk flow, end to end', () => {
+	let quoteUrl = '';
+	let reference = '';
+
+	it('sales fills the request, sees ranked packages, saves and sends the quote', async () => {
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, 'sales@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/quotes/new`);
+		await page.getByLabel('Client', { exact: true }).selectOption({ label: 'Millbrook Riverside Food Festival' });
+		await page.getByLabel('Event', { exact: true }).fill('Riverside main stage, browser test');
+		await page.getByLabel('Hire from').fill('2032-07-03');
+		await page.getByLabel('Hire until').fill('2032-07-04');
+		await page.getByLabel(/Level at the position/).fill('95');
+		await page.getByLabel(/Distance from the system to the position/).fill('25');
+		await page.getByText(/packages checked/).waitFor();
+		await page.getByLabel(/There is a limit at a boundary/).check();
+		await page.getByLabel(/Distance from the system/, { exact: false }).last().fill('300');
+		await page.getByLabel(/^Limit/).fill('70');
+		await page.getByText(/packages checked/).waitFor();
+		await expect(page.getByText('At the boundary').first().isVisible()).resolves.toBe(true);
+		await page.getByRole('img', { name: /Level versus distance|front of house/i }).first().waitFor();
+		await screenshot(page, 'quote-new-1280');
+
+		await page.getByRole('button', { name: /^Save quote with/ }).click();
+		await page.waitForURL(/\/quotes\/\d+$/);
+		quoteUrl = page.url();
+		reference = (await page.locator('p', { hasText: /^Q-\d+/ }).first().textContent())!.match(/Q-\d+/)![0];
+
+		const since = new Date();
+		await page.getByRole('button', { name: 'Send to client' }).click();
+		await page.getByText('Sent: the client has the quote by e-mail.').waitFor();
+		await expect(page.getByTestId('quote-status').textContent()).resolves.toBe('Sent to client');
+		const mail = await waitForMail({ to: CLIENT_EMAIL, subjectIncludes: reference, since, timeoutMs: 10_000 });
+		expect(mail.text).toContain('Riverside main stage, browser test');
+		expect(mail.text).toContain('95 dB(A) average level (Leq) at 25 m');
+		expect(mail.text).toMatch(/At the boundary, 300 m away, we predict/);
+		expect(mail.text).toContain(`/signin?redirectTo=${encodeURIComponent(new URL(quoteUrl).pathname)}`);
+		await page.close();
+	});
+
+	it('the client follows the e-mailed link, signs in and reads the quote with its cautions', async () => {
+		const mail = await waitForMail({ to: CLIENT_EMAIL, subjectIncludes: reference });
+		const link = mail.text.match(/http:\/\/\S+\/signin\?redirectTo=\S+/)![0];
+		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+		await page.goto(link);
+		await page.getByLabel('E-mail').fill(CLIENT_EMAIL);
+		await page.getByLabel('Password').fill(process.env.DEMO_PASSWORD ?? 'throwline-demo');
+		await page.getByRole('button', { name: 'Sign in' }).click();
+		await page.waitForURL(quoteUrl);
+		await page.getByRole('heading', { name: 'Riverside main stage, browser test' }).waitFor();
+		await page.getByText('In short').waitFor();
+		await page.getByRole('complementary', { name: 'Assumptions and cautions' }).waitFor();
+		await expect(page.getByRole('button', { name: 'Accept this quote' }).isVisible()).resolves.toBe(true);
+		const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+		expect(overflow).toBeLessThanOrEqual(0);
+		await screenshot(page, 'quote-client-390');
+		await page.close();
+	});
+
+	it('another client cannot open it (404), by page or API', async () => {
+		const cookie = await sessionCookie('events@st-aldric.test');
+		const id = new URL(quoteUrl).pathname.split('/').pop();
+		expect((await api(`/api/quotes/${id}`, { cookie })).status).toBe(404);
+		const page = await browser.newPage();
+		await signIn(page, 'events@st-aldric.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		const response = await page.goto(quoteUrl);
+		expect(response?.status()).toBe(404);
+		await page.close();
+	});
+});
+
+describe('POST /api/evaluations', () => {
+	const body = {
+		targetDb: 98, weighting: 'A', distance: 100, distanceUnit: 'ft', programme: 'pop-rock',
+		startDate: '2032-08-01', endDate: '2032-08-01', boundary: { distance: 800, limitDb: 75, weighting: 'C' }
+	};
+
+	it('ranks packages clear → tight → short for sales and admin; 403 for others; 401 signed out', async () => {
+		const sales = await sessionCookie('sales@kestrel-yard.test');
+		const result = await api('/api/evaluations', { cookie: sales, method: 'POST', body });
+		expect(result.status).toBe(200);
+		const order = { clear: 0, tight: 1, short: 2 } as Record<string, number>;
+		const verdicts = result.json.results.map((r: { verdict: string }) => order[r.verdict]);
+		expect(verdicts).toEqual([...verdicts].sort((a, b) => a - b));
+		for (const r of result.json.results) {
+			expect(Number.isInteger(r.price.totalMinor)).toBe(true);
+			if (r.evaluation) expect(r.evaluation.boundary.weighting).toBe('C');
+		}
+		expect((await api('/api/evaluations', { cookie: await sessionCookie('warehouse@kestrel-yard.test'), method: 'POST', body })).status).toBe(403);
+		expect((await api('/api/evaluations', { cookie: await sessionCookie(CLIENT_EMAIL), method: 'POST', body })).status).toBe(403);
+		expect((await api('/api/evaluations', { method: 'POST', body })).status).toBe(401);
+	});
+
+	it('answers bad input with 400/422 and field errors, never a 500', async () => {
+		const cookie = await sessionCookie('sales@kestrel-yard.test');
+		const bad = await api('/api/evaluations', {
+			cookie,
+			method: 'POST',
+			body: { ...body, targetDb: 'loud', distance: -5, programme: 'polka', startDate: '2032-02-30', boundary: { distance: 1, limitDb: 500, weighting: 'Q' } }
+		});
+		expect(bad.status).toBe(422);
+		expect(Object.keys(bad.json.errors)).toEqual(expect.arrayContaining(['targetDb', 'distance', 'startDate', 'boundary.limitDb', 'boundary.weighting']));
+		const unknownProgramme = await api('/api/evaluations', { cookie, method: 'POST', body: { ...body, programme: 'polka' } });
+		expect(unknownProgramme.status).toBe(422);
+		expect(unknownProgramme.json.errors.programme).toBeDefined();
+		expect((await api('/api/evaluations', { cookie, method: 'POST', body: 'not json' })).status).toBe(400);
+	});
+});
