@@ -1,0 +1,35 @@
+/** The second invoice of a hire: the balance, once the booking is confirmed. */
+import { db, Client, Invoice, OutboundEmail } from '../db';
+import { deliver, queueEmail } from '../mail/outbox';
+import { invoiceEmail } from '../mail/payment-emails';
+import type { SessionUser } from '../users';
+import { DomainError } from './errors';
+import { issueStripeInvoice, saveIssuedInvoice, voidOrphanInvoice } from './invoices';
+import { getQuote, type QuoteDetail } from './quotes';
+import { getSettings } from './settings';
+
+export async function invoiceBalance(id: number, actor: SessionUser): Promise<{ quote: QuoteDetail; mailSent: boolean }> {
+	const quote = await getQuote(id, actor);
+	if (quote.status !== 'confirmed') throw new DomainError(409, 'The balance is invoiced once the booking is confirmed.');
+	if (quote.invoices.some((i) => i.kind === 'balance' && i.status !== 'void')) {
+		throw new DomainError(409, 'The balance has already been invoiced.');
+	}
+	if (quote.result.price.balanceMinor <= 0) throw new DomainError(409, 'Nothing is left to invoice.');
+	const issued = await issueStripeInvoice(quote, 'balance');
+	let emailId: number;
+	try {
+		emailId = await db().transaction(async (transaction) => {
+			const again = await Invoice.findOne({ where: { quoteId: id, kind: 'balance', status: ['open', 'paid'] }, transaction, lock: transaction.LOCK.UPDATE });
+			if (again && again.stripeInvoiceId !== issued.stripeInvoiceId) throw new DomainError(409, 'The balance has already been invoiced.');
+			await saveIssuedInvoice(id, 'balance', issued, transaction);
+			const client = (await Client.findByPk(quote.clientId, { transaction }))!;
+			const mail = invoiceEmail(client.email, quote, 'balance', issued.amounts.amountMinor, issued.currency, issued.hostedUrl, (await getSettings()).companyName);
+			return (await queueEmail(mail, transaction)).id;
+		});
+	} catch (err) {
+		await voidOrphanInvoice(issued.stripeInvoiceId);
+		throw err;
+	}
+	const mailSent = await deliver((await OutboundEmail.findByPk(emailId))!);
+	return { quote: await getQuote(id, actor), mailSent };
+}
