@@ -1,0 +1,153 @@
+/**
+ * `npm run bench`: sets up its own world (tests/bench/world.ts), measures, tears everything down and
+ * prints one table (also written to .data/bench/last.json). Never part of `npm test`.
+ * Ratios compare against a baseline measured in the same run, so runs on different (or busy)
+ * machines can still be compared.
+ */
+import { fileURLToPath } from 'node:url';
+import { runAcousticsBench } from './acoustics.bench';
+import { httpRows, LOAD, measureHttp } from './http-suite';
+import type { LoadResult } from './http-load';
+import { pageWeight, type PageWeight } from './page-weight';
+import { stopAll } from './proc';
+import { formatTable, writeJson, type Row } from './report';
+import { setUpWorld, tearDownWorld, type World } from './world';
+
+process.chdir(fileURLToPath(new URL('../..', import.meta.url)));
+
+const ACOUSTICS_TARGET = 50_000;
+const PAGE_JS_TARGET_KB = 200;
+const OVERALL_LIMIT_MS = 50 * 60_000;
+const SALES = 'sales@kestrel-yard.test';
+const WAREHOUSE = 'warehouse@kestrel-yard.test';
+
+/** Main pages and who opens them (signed out for /signin). /inventory redirects to its first list. */
+const PAGES: { path: string; who: string | null }[] = [
+	{ path: '/signin', who: null },
+	{ path: '/', who: SALES },
+	{ path: '/quotes', who: SALES },
+	{ path: '/quotes/new', who: SALES },
+	{ path: '/inventory', who: WAREHOUSE }
+];
+
+let cleaning: Promise<void> | null = null;
+function cleanUp(): Promise<void> {
+	cleaning ??= tearDownWorld().finally(stopAll);
+	return cleaning;
+}
+for (const signal of ['SIGINT', 'SIGTERM'] as const) {
+	process.once(signal, () => {
+		console.error(`\n[bench] ${signal}: stopping the bench world…`);
+		void cleanUp().finally(() => process.exit(130));
+	});
+}
+// However things go, the bench stops by itself.
+setTimeout(() => {
+	console.error('[bench] overall time limit reached; stopping');
+	void cleanUp().finally(() => process.exit(2));
+}, OVERALL_LIMIT_MS).unref();
+
+const log = (message: string) => console.error(`[bench] ${message}`);
+
+async function main(): Promise<void> {
+	const started = Date.now();
+	const notes: string[] = [];
+	log('acoustic model (in this process, before the world starts)');
+	const acoustics = runAcousticsBench();
+
+	log('setting up the bench world from nothing (MariaDB, migrate, seed, fakes, build, boot)…');
+	let world: World;
+	let load: LoadResult[];
+	const pages: PageWeight[] = [];
+	try {
+		world = await setUpWorld();
+		notes.push(...world.notes);
+		log(`app answered on ${world.origin} (cold start ${world.coldStartS.toFixed(1)} s)`);
+		// http.ts reads ORIGIN and DEMO_PASSWORD when first imported, so import it only now.
+		process.env.ORIGIN = world.origin;
+		process.env.DEMO_PASSWORD = world.env.DEMO_PASSWORD ?? 'throwline-demo';
+		const { sessionCookie } = await import('../e2e/http');
+		const cookies = new Map<string, string>();
+		for (const who of [SALES, WAREHOUSE]) cookies.set(who, await sessionCookie(who));
+		load = await measureHttp(world.origin, cookies.get(SALES)!, log);
+		log('weighing the JavaScript of the main pages');
+		for (const p of PAGES)
+			pages.push(
+				await pageWeight(
+					world.origin,
+					p.path,
+					p.who ?? 'signed out',
+					p.who ? cookies.get(p.who)! : ''
+				)
+			);
+	} finally {
+		log('stopping the bench world');
+		await cleanUp();
+	}
+
+	const rows: Row[] = [
+		{
+			metric: 'cold start (db init + migrate + seed + build + boot)',
+			value: world.coldStartS,
+			unit: 's'
+		},
+		{ metric: 'app boot (node build → /api/health 200)', value: world.bootS, unit: 's' },
+		{
+			metric: 'acoustic evaluations (evaluatePackage, 1 core)',
+			value: acoustics.opsPerSec,
+			unit: '/s',
+			baseline: acoustics.baselineOpsPerSec,
+			ratio: acoustics.ratio,
+			target: `≥ ${ACOUSTICS_TARGET.toLocaleString('en-GB')}/s`,
+			ok: acoustics.opsPerSec >= ACOUSTICS_TARGET
+		},
+		...httpRows(load, notes),
+		...pages.map((p) => ({
+			metric: `JS for ${p.path}${p.finalPath !== p.path ? ` (→ ${p.finalPath})` : ''} as ${p.role.split('@')[0]}, ${p.modules} modules`,
+			value: p.gzipKb,
+			unit: 'KB gz',
+			target: `≤ ${PAGE_JS_TARGET_KB} KB gz`,
+			ok: p.gzipKb <= PAGE_JS_TARGET_KB
+		}))
+	];
+	if (world.excludedWaitS >= 0.5)
+		notes.push(
+			`${world.excludedWaitS.toFixed(0)} s of waiting for other builds/retries left out of the cold start`
+		);
+	for (const p of pages)
+		if (p.missingNodes.length)
+			notes.push(
+				`${p.path}: route modules for node ids ${p.missingNodes.join(', ')} not found; its JS figure is too low`
+			);
+	if (world.buildAttempts > 1) notes.push(`build needed ${world.buildAttempts} attempts`);
+	notes.push(
+		'acoustics baseline = sumLevels over 9 values; HTTP baseline = GET /api/health in this run',
+		`HTTP: autocannon in this process, ${LOAD.connections} connections, ${LOAD.warmupS} s warm-up then ${LOAD.durationS} s; p50/p95 computed from every response time`,
+		'JS: modules named by the page (HTML + modulepreload link header) plus their static imports (dynamic import() not followed), gzip via node:zlib'
+	);
+
+	console.log(
+		`\nThrowline bench — ${new Date().toISOString()} (${((Date.now() - started) / 1000).toFixed(0)} s)\n`
+	);
+	console.log(formatTable(rows));
+	console.log(`\n${notes.map((n) => `· ${n}`).join('\n')}`);
+	writeJson('.data/bench/last.json', {
+		at: new Date().toISOString(),
+		rows,
+		load,
+		pages,
+		acoustics,
+		world: { ...world, env: undefined },
+		notes
+	});
+	console.log('\n(also written to .data/bench/last.json)');
+}
+
+main().then(
+	() => process.exit(0),
+	async (err: unknown) => {
+		console.error('[bench] failed:', err instanceof Error ? err.message : err);
+		await cleanUp();
+		process.exit(1);
+	}
+);
