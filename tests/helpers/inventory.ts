@@ -7,6 +7,7 @@ import { randomUUID } from 'node:crypto';
 import { AmplifierModel, Client, LoudspeakerModel, Package, PackageGroup, StockUnit, User } from '../../src/lib/server/db/models';
 import { hashPassword } from '../../src/lib/server/auth/password';
 import type { SessionUser } from '../../src/lib/server/users';
+import { CATALOGUE, invalidate } from '../../src/lib/server/cache';
 
 export async function makeStockedPackage(options: { cabinets?: number; units?: number; amplifierUnits?: number } = {}) {
 	const tag = randomUUID().slice(0, 8);
@@ -34,6 +35,7 @@ export async function makeStockedPackage(options: { cabinets?: number; units?: n
 	for (let i = 0; i < (options.amplifierUnits ?? 1); i++) {
 		await StockUnit.create({ serial: `FXA-${tag}-${i}`, modelType: 'amplifier', loudspeakerModelId: null, amplifierModelId: amplifier.id, status: 'ready', location: 'Rack', lastTestedAt: null, notes: '' } as never);
 	}
+	invalidate(CATALOGUE); // rows written directly, past the services that normally drop the cache
 	return { loudspeaker, amplifier, pkg, tag };
 }
 

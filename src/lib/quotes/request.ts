@@ -24,7 +24,7 @@ export function toModelRequest(input: QuoteRequestInput, programme: Programme, d
 }
 
 /** Distances for the level-versus-distance chart: log-spaced from 1 m to past the farthest point of interest. */
-export function chartDistances(request: QuoteRequest, points = 32): number[] {
+export function chartDistances(request: QuoteRequest, points = 24): number[] {
 	const farthest = Math.max(request.distanceM, request.boundary?.distanceM ?? 0) * 1.6;
 	const end = Math.max(10, farthest);
 	return Array.from({ length: points }, (_, i) => Number((end ** (i / (points - 1))).toFixed(3)));

@@ -8,6 +8,8 @@ const TTL_MS = 5000;
 
 /** Key prefix of the quoting engine's view of packages and models. */
 export const CATALOGUE = 'catalogue:';
+/** Key prefix of confirmed bookings as the evaluations read them. */
+export const BOOKINGS = 'bookings:';
 const entries = new Map<string, { expires: number; value: Promise<unknown> }>();
 
 export function cached<T>(key: string, load: () => Promise<T>): Promise<T> {

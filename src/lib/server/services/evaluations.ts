@@ -2,6 +2,7 @@ import { MODEL_ASSUMPTIONS, type QuoteRequest } from '$lib/acoustics';
 import { evaluatePackages, type PackageResult } from '$lib/quotes/evaluate-packages';
 import { toModelRequest } from '$lib/quotes/request';
 import type { QuoteRequestInput } from '$lib/schemas/evaluation';
+import { CATALOGUE, BOOKINGS, cached } from '../cache';
 import { loadedPackages, reservationsOverlapping, unitsInService } from './catalogue';
 import { DomainError } from './errors';
 import { findProgramme, toProgramme } from './programmes';
@@ -23,8 +24,12 @@ export async function evaluateForDesk(
 		getSettings(),
 		findProgramme(input.programme),
 		loadedPackages({ activeOnly: true, ids: options.packageIds }),
-		unitsInService(),
-		reservationsOverlapping(input.startDate, input.endDate, { excludeQuoteId: options.excludeQuoteId })
+		// Read through the short-lived cache: the desk asks again on every keystroke. Reserving stock
+		// never uses these; it reads under row locks (bookings.ts).
+		cached(`${CATALOGUE}units`, () => unitsInService()),
+		cached(`${BOOKINGS}${input.startDate}:${input.endDate}:${options.excludeQuoteId ?? ''}`, () =>
+			reservationsOverlapping(input.startDate, input.endDate, { excludeQuoteId: options.excludeQuoteId })
+		)
 	]);
 	if (!programmeRow) {
 		throw new DomainError(422, 'Unknown programme profile.', { programme: ['Choose one of the programme profiles'] });

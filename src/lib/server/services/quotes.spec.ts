@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { useTestDatabase } from '../../../../tests/helpers/db';
 import { makeClientUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
+import { BOOKINGS, invalidate } from '../cache';
 import { Booking, BookingLine, LoudspeakerModel } from '../db/models';
 import { applyQuoteAction } from './quote-actions';
 import { createQuote, getQuote, listQuotes, reviseQuote } from './quotes';
@@ -26,6 +27,7 @@ describe('availability against confirmed bookings', () => {
 		const other = await quoteFor(client.id, pkg.id, desk);
 		const booking = await Booking.create({ quoteId: other.id, status: 'confirmed', startDate: '2031-05-11', endDate: '2031-05-12' });
 		await BookingLine.create({ bookingId: booking.id, modelType: 'loudspeaker', modelId: loudspeaker.id, quantity: 2 });
+		invalidate(BOOKINGS); // written directly, past the booking service
 
 		const overlapping = await evaluateForDesk(request, { packageIds: [pkg.id] });
 		expect(overlapping.results[0].availability).toEqual({
