@@ -2,6 +2,7 @@ import { SvelteKitAuth, CredentialsSignin } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
 import { signInSchema } from '$lib/schemas/auth';
 import { checkCredentials } from '$lib/server/auth/credentials';
+import { consumeSignInLink } from '$lib/server/auth/sign-in-links';
 
 class InactiveAccount extends CredentialsSignin {
 	code = 'inactive';
@@ -22,6 +23,13 @@ export const { handle, signIn, signOut } = SvelteKitAuth({
 				if (result.reason === 'inactive') throw new InactiveAccount();
 				return null;
 			}
+		}),
+		// The one-time link e-mailed with a quote (see sign-in-links.ts).
+		Credentials({
+			id: 'link',
+			name: 'Sign-in link',
+			credentials: { token: {} },
+			authorize: (raw) => consumeSignInLink(String(raw?.token ?? ''))
 		})
 	],
 	callbacks: {

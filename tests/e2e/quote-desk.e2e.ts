@@ -87,6 +87,34 @@ describe('the desk flow, end to end', () => {
 	});
 });
 
+describe('a new organiser without an account', () => {
+	it('gets a one-time sign-in link with the quote that opens it, once', async () => {
+		const email = `new-organiser-${Date.now()}@example.test`;
+		const sales = await sessionCookie('sales@kestrel-yard.test');
+		const request = { targetDb: 80, weighting: 'A', distance: 10, distanceUnit: 'm', programme: 'speech', startDate: '2032-09-05', endDate: '2032-09-05' };
+		const ranked = await api('/api/evaluations', { cookie: sales, method: 'POST', body: request });
+		const created = await api('/api/quotes', {
+			cookie: sales,
+			method: 'POST',
+			body: { newClient: { name: 'Harbour Lights Fair', contactName: 'Noor Vance', email }, eventName: 'Harbour fair welcome', packageId: ranked.json.results[0].packageId, request }
+		});
+		expect(created.status).toBe(201);
+		expect((await api(`/api/quotes/${created.json.id}/actions`, { cookie: sales, method: 'POST', body: { action: 'send' } })).status).toBe(200);
+		const mail = await waitForMail({ to: email, subjectIncludes: 'Harbour fair welcome', timeoutMs: 10_000 });
+		const link = mail.text.match(/http:\/\/\S+\/signin\/link\/[\w-]+/)![0];
+
+		const page = await browser.newPage();
+		await page.goto(link);
+		await page.getByRole('button', { name: 'Continue to my quote' }).click();
+		await page.waitForURL(`${BASE_URL}/quotes/${created.json.id}`);
+		await page.getByRole('heading', { name: 'Harbour fair welcome' }).waitFor();
+		await page.context().clearCookies();
+		await page.goto(link);
+		await page.getByRole('heading', { name: 'This link has expired' }).waitFor();
+		await page.close();
+	});
+});
+
 describe('POST /api/evaluations', () => {
 	const body = {
 		targetDb: 98, weighting: 'A', distance: 100, distanceUnit: 'ft', programme: 'pop-rock',

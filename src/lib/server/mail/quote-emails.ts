@@ -8,20 +8,22 @@ const escapeHtml = (s: string) =>
 	s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
 /** The quote e-mail: a plain-language summary and a sign-in link that lands on the quote. */
-export function quoteSentEmail(quote: QuoteDetail, to: string, companyName: string): EmailMessage {
+export function quoteSentEmail(quote: QuoteDetail, to: string, companyName: string, signInToken: string): EmailMessage {
 	const link = `${publicOrigin()}/signin?redirectTo=${encodeURIComponent(`/quotes/${quote.id}`)}`;
+	const oneTime = `${publicOrigin()}/signin/link/${signInToken}`;
 	const boundary = boundarySentence(quote.result, quote.request);
 	const paragraphs = [
 		`Here is our quote ${quote.reference} for ${quote.eventName}, ${quote.startDate} to ${quote.endDate}.`,
 		`We propose "${quote.packageName}" to give ${levelPromise(quote.request)}. ${headroomSentence(quote.result)}`,
 		...(boundary ? [boundary] : []),
 		moneyLines(quote.result).map((l) => `${l.label}: ${l.value}`).join('\n'),
-		`Read the full quote, accept it and pay the deposit here (sign in with this e-mail address):\n${link}`,
+		`Read the full quote, accept it and pay the deposit here (this link signs you in once, for 14 days):\n${oneTime}`,
+		`Or sign in with your password:\n${link}`,
 		CLIENT_CAUTIONS.join('\n')
 	];
 	const html = `<div style="font-family:system-ui,sans-serif;color:#1b2a33;max-width:36rem">${paragraphs
 		.map((p) => `<p>${escapeHtml(p).replace(/\n/g, '<br>')}</p>`)
-		.join('')}<p><a href="${escapeHtml(link)}" style="color:#1f5c63">Open quote ${quote.reference}</a></p></div>`;
+		.join('')}<p><a href="${escapeHtml(oneTime)}" style="color:#1f5c63">Open quote ${quote.reference}</a></p></div>`;
 	return {
 		to,
 		subject: `Quote ${quote.reference} for ${quote.eventName} — ${formatMoney(quote.totalMinor, quote.currency)} from ${companyName}`,

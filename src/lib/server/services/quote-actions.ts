@@ -4,6 +4,7 @@ import { db, Client, OutboundEmail, Quote } from '../db';
 import { deliver, queueEmail } from '../mail/outbox';
 import { invoiceEmail } from '../mail/payment-emails';
 import { quoteSentEmail } from '../mail/quote-emails';
+import { clientAccountFor, createSignInLink } from '../auth/sign-in-links';
 import type { SessionUser } from '../users';
 import { cancelMoney } from './cancellation';
 import { DomainError } from './errors';
@@ -55,7 +56,9 @@ export async function applyQuoteAction(id: number, action: QuoteAction, actor: S
 			const company = (await getSettings()).companyName;
 			if (action === 'cancel') await releaseBooking(id, transaction);
 			if (action === 'send') {
-				return (await queueEmail(quoteSentEmail({ ...before, status: next }, client.email, company), transaction)).id;
+				const account = await clientAccountFor(client, transaction);
+				const token = await createSignInLink(account.id, `/quotes/${id}`, transaction);
+				return (await queueEmail(quoteSentEmail({ ...before, status: next }, client.email, company, token), transaction)).id;
 			}
 			if (deposit) {
 				await saveIssuedInvoice(id, 'deposit', deposit, transaction);

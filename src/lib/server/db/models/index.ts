@@ -1,10 +1,11 @@
 import type { Sequelize } from 'sequelize';
 import { Client } from './client';
+import { SignInLink } from './sign-in-link';
 import { User } from './user';
 import { initQuotingModels } from './quoting';
 import { initInventoryModels } from './inventory';
 
-export { Client, User };
+export { Client, SignInLink, User };
 export * from './quoting';
 export * from './inventory';
 
@@ -12,6 +13,7 @@ export * from './inventory';
 export function initModels(sequelize: Sequelize): void {
 	Client.initModel(sequelize);
 	User.initModel(sequelize);
+	SignInLink.initModel(sequelize);
 
 	Client.hasMany(User, { foreignKey: 'clientId', as: 'users' });
 	User.belongsTo(Client, { foreignKey: 'clientId', as: 'client' });

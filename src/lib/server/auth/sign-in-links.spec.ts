@@ -1,0 +1,46 @@
+import { createHash } from 'node:crypto';
+import { describe, expect, it } from 'vitest';
+import { uniqueEmail, useTestDatabase } from '../../../../tests/helpers/db';
+import { Client, SignInLink, User } from '../db/models';
+import { clientAccountFor, consumeSignInLink, createSignInLink, peekSignInLink } from './sign-in-links';
+
+useTestDatabase();
+
+async function newClient() {
+	const email = uniqueEmail('organiser');
+	return Client.create({ name: 'Test organiser', contactName: 'Robin Test', email });
+}
+
+describe('sign-in links', () => {
+	it('makes one client account per organisation, with a password nobody knows', async () => {
+		const client = await newClient();
+		const first = await clientAccountFor(client);
+		const second = await clientAccountFor(client);
+		expect(second.id).toBe(first.id);
+		expect(first).toMatchObject({ role: 'client', clientId: client.id, email: client.email });
+	});
+
+	it('stores only a hash, works once, and keeps only same-site redirects', async () => {
+		const user = await clientAccountFor(await newClient());
+		const token = await createSignInLink(user.id, 'https://evil.example/steal');
+		const row = await SignInLink.findOne({ where: { userId: user.id } });
+		expect(row!.tokenHash).toBe(createHash('sha256').update(token).digest('hex'));
+		expect(row!.redirectTo).toBe('/');
+		expect(await peekSignInLink(token)).toEqual({ email: user.email, redirectTo: '/' });
+		expect(await consumeSignInLink(token)).toMatchObject({ id: String(user.id), role: 'client' });
+		expect(await consumeSignInLink(token)).toBeNull();
+		expect(await peekSignInLink(token)).toBeNull();
+	});
+
+	it('refuses expired links, unknown tokens and deactivated accounts', async () => {
+		const user = await clientAccountFor(await newClient());
+		const expired = await createSignInLink(user.id, '/quotes/1');
+		await SignInLink.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { userId: user.id } });
+		expect(await consumeSignInLink(expired)).toBeNull();
+		expect(await consumeSignInLink('not-a-real-token-at-all-0000')).toBeNull();
+		expect(await consumeSignInLink('../../etc')).toBeNull();
+		const fresh = await createSignInLink(user.id, '/quotes/1');
+		await User.update({ active: false }, { where: { id: user.id } });
+		expect(await consumeSignInLink(fresh)).toBeNull();
+	});
+});
