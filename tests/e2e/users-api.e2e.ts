@@ -12,6 +12,17 @@ beforeAll(async () => {
 	cookies.client = await sessionCookie('organiser@millbrook-riverside.test');
 });
 
+describe('a form posted to the reserved action name', () => {
+	it('is a 400, not a server error', async () => {
+		const response = await fetch(`${process.env.ORIGIN ?? 'http://127.0.0.1:3100'}/signin?/default`, {
+			method: 'POST',
+			headers: { origin: process.env.ORIGIN ?? 'http://127.0.0.1:3100', 'content-type': 'application/x-www-form-urlencoded' },
+			body: 'email=a%40b.test&password=x'
+		});
+		expect(response.status).toBe(400);
+	});
+});
+
 describe('GET /api/health', () => {
 	it('answers ok with the database up, signed in or not', async () => {
 		expect(await api('/api/health')).toEqual({ status: 200, json: { status: 'ok', db: 'ok' } });
