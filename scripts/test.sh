@@ -23,3 +23,6 @@ bash scripts/test-world.sh app
 
 step "browser tests"
 npx vitest run --config tests/e2e/vitest.config.ts
+
+step "fault tests (own world)"
+npx vitest run --config tests/faults/vitest.config.ts

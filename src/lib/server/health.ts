@@ -1,4 +1,4 @@
-import { QueryTypes } from 'sequelize';
+import { ConnectionError, QueryTypes } from 'sequelize';
 import { db } from './db';
 
 const TIMEOUT_MS = 2000;
@@ -16,4 +16,15 @@ export async function databaseAnswers(): Promise<boolean> {
 	} finally {
 		clearTimeout(timer);
 	}
+}
+
+/** True when an error, or one it wraps (Auth.js keeps the original in `cause.err`), is a lost database connection. */
+export function isDatabaseDown(err: unknown): boolean {
+	let current = err;
+	for (let depth = 0; current && depth < 5; depth++) {
+		if (current instanceof ConnectionError) return true;
+		const cause = (current as { cause?: unknown }).cause;
+		current = (cause as { err?: unknown } | undefined)?.err ?? cause;
+	}
+	return false;
 }

@@ -54,14 +54,33 @@ export async function sendEmail(message: EmailMessage): Promise<{ sent: boolean;
 	return { sent: await deliver(email), emailId: email.id };
 }
 
-/** Sends whatever is still waiting (called on a timer and after each successful send). */
-export async function retryQueuedEmails(limit = 20): Promise<{ sent: number; failed: number }> {
+/** A fresh message is delivered by its sender right after its transaction commits; a retry pass
+ * leaves `pending` rows younger than this alone so it never sends the same message twice. */
+const PENDING_GRACE_MS = 60_000;
+
+/**
+ * Sends whatever is still waiting (called by the timer in `retry.ts`). While the SMTP server does
+ * not answer, nothing is tried, so an outage never uses up a message's attempts.
+ */
+export async function retryQueuedEmails(limit = 20): Promise<{ sent: number; failed: number; serverDown: boolean }> {
 	const waiting = await OutboundEmail.findAll({
-		where: { status: { [Op.in]: ['pending', 'failed'] }, attempts: { [Op.lt]: MAX_ATTEMPTS } },
+		where: {
+			attempts: { [Op.lt]: MAX_ATTEMPTS },
+			[Op.or]: [
+				{ status: 'failed' },
+				{ status: 'pending', createdAt: { [Op.lt]: new Date(Date.now() - PENDING_GRACE_MS) } }
+			]
+		},
 		order: [['id', 'ASC']],
 		limit
 	});
+	if (waiting.length === 0) return { sent: 0, failed: 0, serverDown: false };
+	try {
+		await mailTransport().verify();
+	} catch {
+		return { sent: 0, failed: waiting.length, serverDown: true };
+	}
 	let sent = 0;
 	for (const email of waiting) if (await deliver(email)) sent++;
-	return { sent, failed: waiting.length - sent };
+	return { sent, failed: waiting.length - sent, serverDown: false };
 }

@@ -4,6 +4,8 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import type { CredentialsSignin } from '@auth/sveltekit';
 import { signIn } from '../../../auth';
 import { safeRedirectPath, signInSchema } from '$lib/schemas/auth';
+import { isDatabaseDown } from '$lib/server/health';
+import { DATABASE_DOWN_MESSAGE } from '../../../hooks/unavailable';
 import type { Actions, PageServerLoad } from './$types';
 
 const NOT_RECOGNISED = 'That e-mail and password do not match an account. Check both and try again.';
@@ -41,6 +43,8 @@ export const actions: Actions = {
 				const target = new URL(thrown.location, event.url);
 				redirect(303, safeRedirectPath(target.pathname + target.search));
 			}
+			// The account cannot be checked while the database is down: say so calmly, not a 500.
+			if (isDatabaseDown(thrown)) return message(form, DATABASE_DOWN_MESSAGE, { status: 503 });
 			if (!isCredentialsSignin(thrown)) throw thrown;
 			const inactive = thrown.code === 'inactive';
 			return message(form, inactive ? INACTIVE : NOT_RECOGNISED, { status: inactive ? 403 : 401 });
