@@ -1,6 +1,7 @@
 /**
  * Throwline's own palette and type scale. Calm neutrals for long desk sessions, one deep teal for
  * actions, and three verdict colours that stay distinguishable in daylight on a warehouse phone.
+ * Text colours keep at least 4.5:1 against paper, raised and sunk paper, and their verdict backgrounds (WCAG AA).
  * @type {import('tailwindcss').Config}
  */
 export default {
@@ -8,12 +9,12 @@ export default {
 	theme: {
 		extend: {
 			colors: {
-				ink: { DEFAULT: '#1b2a33', soft: '#42535e', faint: '#6b7a83' },
+				ink: { DEFAULT: '#1b2a33', soft: '#42535e', faint: '#5c6b74' },
 				paper: { DEFAULT: '#f6f4ef', raised: '#ffffff', sunk: '#ece8df' },
 				line: { DEFAULT: '#d9d3c7', strong: '#b9b1a2' },
 				river: { DEFAULT: '#1f5c63', dark: '#163f44', light: '#d7e8e6' },
-				clear: { DEFAULT: '#2f7a4d', bg: '#e1f0e6' },
-				tight: { DEFAULT: '#94620f', bg: '#f8ecd2' },
+				clear: { DEFAULT: '#2b7247', bg: '#e1f0e6' },
+				tight: { DEFAULT: '#8c5c0d', bg: '#f8ecd2' },
 				short: { DEFAULT: '#a63a2c', bg: '#f6e0dc' }
 			},
 			fontFamily: {

@@ -3,11 +3,6 @@ import { formatMoney } from './pricing';
 import type { PackageResult } from './evaluate-packages';
 import type { QuoteRequestInput } from '../schemas/evaluation';
 
-export function formatDb(value: number | null | undefined, digits = 1): string {
-	if (value === null || value === undefined || !Number.isFinite(value)) return 'not covered';
-	return `${value > 0 ? '+' : ''}${value.toFixed(digits)} dB`;
-}
-
 export function distanceText(value: number, unit: 'm' | 'ft'): string {
 	return `${Number(value.toFixed(1))} ${unit}`;
 }
