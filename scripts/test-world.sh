@@ -10,6 +10,7 @@ cd "$(dirname "$0")/.."
 
 services() {
 	mkdir -p "$RUN_DIR"
+	stop_app # an app left running would take the payment stand-in's webhooks meant for the unit tests
 	bash scripts/fakes.sh stop >/dev/null # fakes left from an earlier run would keep its state
 	rm -rf "$MAIL_DIR" "$UPLOAD_DIR" "$RUN_DIR/stripe-state.json"
 	bash scripts/db.sh start
