@@ -22,7 +22,11 @@ services() {
 
 app() {
 	# Builds share .svelte-kit/output: the lock keeps a concurrent npm start build from mixing in.
-	mkdir -p .data && flock .data/build.lock node node_modules/vite/bin/vite.js build --logLevel error
+	mkdir -p .data "$RUN_DIR"
+	if ! flock .data/build.lock node node_modules/vite/bin/vite.js build --logLevel warn >"$RUN_DIR/build.log" 2>&1; then
+		tail -40 "$RUN_DIR/build.log" >&2
+		return 1
+	fi
 	stop_app
 	setsid node "$BUILD_DIR" >"$RUN_DIR/app.log" 2>&1 </dev/null &
 	echo $! >"$RUN_DIR/app.pid"
