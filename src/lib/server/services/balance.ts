@@ -16,6 +16,7 @@ export async function invoiceBalance(id: number, actor: SessionUser): Promise<{ 
 	}
 	if (quote.result.price.balanceMinor <= 0) throw new DomainError(409, 'Nothing is left to invoice.');
 	const issued = await issueStripeInvoice(quote, 'balance');
+	const company = (await getSettings()).companyName; // read before the transaction, see quote-actions
 	let emailId: number;
 	try {
 		emailId = await db().transaction(async (transaction) => {
@@ -23,7 +24,7 @@ export async function invoiceBalance(id: number, actor: SessionUser): Promise<{ 
 			if (again && again.stripeInvoiceId !== issued.stripeInvoiceId) throw new DomainError(409, 'The balance has already been invoiced.');
 			await saveIssuedInvoice(id, 'balance', issued, transaction);
 			const client = (await Client.findByPk(quote.clientId, { transaction }))!;
-			const mail = invoiceEmail(client.email, quote, 'balance', issued.amounts.amountMinor, issued.currency, issued.hostedUrl, (await getSettings()).companyName);
+			const mail = invoiceEmail(client.email, quote, 'balance', issued.amounts.amountMinor, issued.currency, issued.hostedUrl, company);
 			return (await queueEmail(mail, transaction)).id;
 		});
 	} catch (err) {

@@ -19,10 +19,13 @@ class RetryLater extends Error {}
 
 export async function applyStripeEvent(event: Stripe.Event): Promise<EventOutcome> {
 	let emailIds: number[] = [];
+	// Read before the transaction: a query outside it while every pooled connection is held by
+	// transactions queued on the same row locks would wait for a connection that never frees.
+	const company = (await getSettings()).companyName;
 	try {
 		const outcome = await reservationTransaction(async (transaction) => {
 			await WebhookEvent.create({ id: event.id, type: event.type, outcome: 'applying' }, { transaction });
-			const result = await route(event, transaction);
+			const result = await route(event, { t: transaction, company });
 			emailIds = result.emailIds;
 			await WebhookEvent.update({ outcome: result.outcome }, { where: { id: event.id }, transaction });
 			return result.outcome;
@@ -40,16 +43,21 @@ export async function applyStripeEvent(event: Stripe.Event): Promise<EventOutcom
 
 type Applied = { outcome: string; emailIds: number[] };
 
-async function route(event: Stripe.Event, t: Transaction): Promise<Applied> {
+interface Ctx {
+	t: Transaction;
+	company: string;
+}
+
+async function route(event: Stripe.Event, ctx: Ctx): Promise<Applied> {
 	switch (event.type) {
 		case 'invoice.paid':
-			return invoicePaid(event.data.object as Stripe.Invoice, t);
+			return invoicePaid(event.data.object as Stripe.Invoice, ctx);
 		case 'invoice.payment_failed':
-			return invoicePaymentFailed(event.data.object as Stripe.Invoice, t);
+			return invoicePaymentFailed(event.data.object as Stripe.Invoice, ctx.t);
 		case 'invoice.voided':
-			return invoiceVoided(event.data.object as Stripe.Invoice, t);
+			return invoiceVoided(event.data.object as Stripe.Invoice, ctx.t);
 		case 'charge.refunded':
-			return chargeRefunded(event.data.object as Stripe.Charge, t);
+			return chargeRefunded(event.data.object as Stripe.Charge, ctx.t);
 		default:
 			return { outcome: `ignored ${event.type}`, emailIds: [] };
 	}
@@ -63,23 +71,23 @@ async function ourInvoice(stripeInvoiceId: string | undefined, t: Transaction): 
 	return invoice;
 }
 
-async function emailTo(quote: Quote, build: (to: string, q: Parameters<typeof receiptEmail>[1], company: string) => EmailMessage, t: Transaction) {
-	const [client, version, settings] = await Promise.all([
+async function emailTo(quote: Quote, build: (to: string, q: Parameters<typeof receiptEmail>[1], company: string) => EmailMessage, { t, company }: Ctx) {
+	const [client, version] = await Promise.all([
 		Client.findByPk(quote.clientId, { transaction: t }),
-		QuoteVersion.findOne({ where: { quoteId: quote.id, version: quote.currentVersion }, transaction: t }),
-		getSettings()
+		QuoteVersion.findOne({ where: { quoteId: quote.id, version: quote.currentVersion }, transaction: t })
 	]);
 	const ref = { id: quote.id, reference: quoteReference(quote.id), eventName: quote.eventName, startDate: version!.startDate, endDate: version!.endDate };
-	return (await queueEmail(build(client!.email, ref, settings.companyName), t)).id;
+	return (await queueEmail(build(client!.email, ref, company), t)).id;
 }
 
-async function invoicePaid(object: Stripe.Invoice, t: Transaction): Promise<Applied> {
+async function invoicePaid(object: Stripe.Invoice, ctx: Ctx): Promise<Applied> {
+	const { t } = ctx;
 	const invoice = await ourInvoice(object.id, t);
 	if (invoice.status === 'paid') return { outcome: 'invoice already paid', emailIds: [] };
 	const legacy = object as Stripe.Invoice & { payment_intent?: string | null };
 	await invoice.update({ status: 'paid', paidAt: new Date(), paymentIntentId: legacy.payment_intent ?? null, lastPaymentError: null }, { transaction: t });
 	const quote = (await Quote.findByPk(invoice.quoteId, { transaction: t, lock: t.LOCK.UPDATE }))!;
-	const emailIds = [await emailTo(quote, (to, q, c) => receiptEmail(to, q, invoice.amountMinor, invoice.currency, c), t)];
+	const emailIds = [await emailTo(quote, (to, q, c) => receiptEmail(to, q, invoice.amountMinor, invoice.currency, c), ctx)];
 	if (invoice.kind !== 'deposit') return { outcome: 'balance paid', emailIds };
 
 	if (!nextStatus(quote.status, 'pay-deposit')) {
@@ -92,11 +100,11 @@ async function invoicePaid(object: Stripe.Invoice, t: Transaction): Promise<Appl
 	if (!reservation.ok) {
 		const missing = reservation.shortfalls.map((s) => `${s.name}: ${s.missing} short`).join('; ');
 		await quote.update({ bookingIssue: `Deposit paid but not enough units on the dates (${missing}).` }, { transaction: t });
-		emailIds.push(await emailTo(quote, bookingHeldUpEmail, t));
+		emailIds.push(await emailTo(quote, bookingHeldUpEmail, ctx));
 		return { outcome: 'deposit paid; stock short, flagged for the desk', emailIds };
 	}
 	await quote.update({ status: 'confirmed', bookingIssue: null }, { transaction: t });
-	emailIds.push(await emailTo(quote, bookingConfirmedEmail, t));
+	emailIds.push(await emailTo(quote, bookingConfirmedEmail, ctx));
 	return { outcome: 'deposit paid; booking confirmed', emailIds };
 }
 

@@ -127,5 +127,5 @@ describe('racing for the last units', () => {
 		const reserved = (await BookingLine.sum('quantity', { where: { modelType: 'loudspeaker', modelId: loudspeaker.id } })) ?? 0;
 		expect(reserved).toBe(5);
 		expect(await Invoice.count({ where: { quoteId: quotes.map((q) => q.id), status: 'paid' } })).toBe(20);
-	});
+	}, 90_000);
 });

@@ -41,6 +41,8 @@ export async function applyQuoteAction(id: number, action: QuoteAction, actor: S
 	const deposit = action === 'accept' ? await issueStripeInvoice(before, 'deposit') : null;
 	const refund = action === 'cancel' ? await cancelMoney(before) : null;
 
+	// Outside the transaction, so it never waits for a second pooled connection while holding locks.
+	const company = (await getSettings()).companyName;
 	let emailId: number | null = null;
 	try {
 		emailId = await db().transaction(async (transaction) => {
@@ -53,7 +55,6 @@ export async function applyQuoteAction(id: number, action: QuoteAction, actor: S
 			const stamp = TIMESTAMPS[next];
 			await quote.update({ status: next, ...(stamp ? { [stamp]: new Date() } : {}) }, { transaction });
 			const client = (await Client.findByPk(quote.clientId, { transaction }))!;
-			const company = (await getSettings()).companyName;
 			if (action === 'cancel') await releaseBooking(id, transaction);
 			if (action === 'send') {
 				const account = await clientAccountFor(client, transaction);
