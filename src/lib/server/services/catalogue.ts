@@ -5,29 +5,9 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import type { LoadedPackage } from '$lib/inventory/types';
 import type { ModelKey, Reservation } from '$lib/quotes/availability';
-import { AmplifierModel, Booking, BookingLine, LoudspeakerModel, Package, PackageGroup, StockUnit } from '../db/models';
+import { Booking, BookingLine, StockUnit } from '../db/models';
 import { CATALOGUE, cached, invalidate } from '../cache';
-import { plainRow } from './inventory-common';
-
-const withModels = {
-	model: PackageGroup,
-	as: 'groups',
-	include: [
-		{ model: LoudspeakerModel, as: 'loudspeaker' },
-		{ model: AmplifierModel, as: 'amplifier' }
-	]
-};
-
-/** The plain shape of a package row loaded `withModels`. */
-export function toLoadedPackage(found: Package): LoadedPackage {
-	return {
-		...plainRow<Omit<LoadedPackage, 'groups'>>(found),
-		groups: (found.groups ?? []).map((g) => {
-			const { packageId: _p, ...group } = g.get({ plain: true }) as PackageGroup & Record<string, unknown>;
-			return { ...group, loudspeaker: plainRow(g.loudspeaker!), amplifier: plainRow(g.amplifier!) };
-		})
-	} as LoadedPackage;
-}
+import { listLoadedPackages } from './inventory-packages';
 
 /** Call after any write to packages, models or stock units. */
 export function catalogueChanged(): void {
@@ -36,23 +16,12 @@ export function catalogueChanged(): void {
 
 /** Every package with its models, cached briefly: the desk re-evaluates on each keystroke. */
 export async function loadedPackages(where: { ids?: number[]; activeOnly?: boolean } = {}): Promise<LoadedPackage[]> {
-	let all = await cached(`${CATALOGUE}packages`, () => loadAllPackages());
+	let all = await cached(`${CATALOGUE}packages`, listLoadedPackages);
 	if (where.ids?.some((id) => !all.some((p) => p.id === id))) {
 		catalogueChanged(); // a package newer than the cached list
-		all = await cached(`${CATALOGUE}packages`, () => loadAllPackages());
+		all = await cached(`${CATALOGUE}packages`, listLoadedPackages);
 	}
 	return all.filter((p) => (!where.activeOnly || p.active) && (!where.ids || where.ids.includes(p.id)));
-}
-
-async function loadAllPackages(): Promise<LoadedPackage[]> {
-	const rows = await Package.findAll({
-		include: [withModels],
-		order: [
-			['name', 'ASC'],
-			[{ model: PackageGroup, as: 'groups' }, 'position', 'ASC']
-		]
-	});
-	return rows.map(toLoadedPackage);
 }
 
 /** Ready units per model. Units in repair or retired are not offered for hire. */
