@@ -14,6 +14,8 @@ import type {
 	CapabilityLimit,
 	Evaluation,
 	LimitedBy,
+	LimitsResult,
+	Outcome,
 	PackageSpec,
 	QuoteRequest,
 	Verdict
@@ -70,6 +72,22 @@ export function evaluatePackage(pkg: PackageSpec, request: QuoteRequest): Evalua
 		!coverage.ok || headroomDb < 0 ? 'short' : headroomDb >= marginDb ? 'clear' : 'tight';
 	if (!coverage.ok && headroomDb >= 0) limitedBy = 'coverage';
 
+	const boundary = request.boundary
+		? boundaryPrediction(
+				groups,
+				requirement,
+				continuous,
+				request.targetDb,
+				request.boundary,
+				alphas,
+				c
+			)
+		: null;
+	// Step 9 without a site: the boundary is the only limit.
+	const limits: LimitsResult = boundary
+		? { ok: boundary.marginDb >= 0, maxTargetDb: boundary.maxTargetDb, bindingReceiver: 'boundary' }
+		: { ok: true, maxTargetDb: null, bindingReceiver: null };
+	const outcome: Outcome = verdict === 'short' ? 'short' : limits.ok ? verdict : 'over-limit';
 	return {
 		headroomDb,
 		verdict,
@@ -78,17 +96,10 @@ export function evaluatePackage(pkg: PackageSpec, request: QuoteRequest): Evalua
 		bands,
 		...amplifierNeeds(pkg.groups),
 		coverage,
-		boundary: request.boundary
-			? boundaryPrediction(
-					groups,
-					requirement,
-					continuous,
-					request.targetDb,
-					request.boundary,
-					alphas,
-					c
-				)
-			: null
+		boundary,
+		receivers: [],
+		limits,
+		outcome
 	};
 }
 

@@ -2,6 +2,5 @@
 export { toLoudspeakerSpec, toAmplifierSpec, toPackageSpec } from './to-spec';
 export { packageBillOfMaterials, channelsNeeded, type BillOfMaterials, type BillLine, type AmplifierBillLine, type FlownHang } from './bill-of-materials';
 export { LOUDSPEAKER_CSV_COLUMNS, AMPLIFIER_CSV_COLUMNS, serialiseCsv, parseModelsCsv, csvErrorEnvelope, type ParsedCsv, type CsvRow } from './csv';
-export { INVENTORY_READERS, INVENTORY_EDITORS, canEditInventory } from './roles';
 export * from './types';
 export { channelPlanErrors, channelLoadOhm, type PlannedGroup } from './channel-plan';

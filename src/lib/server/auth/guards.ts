@@ -1,21 +1,22 @@
 import { error, redirect } from '@sveltejs/kit';
-import type { Role } from '$lib/permissions';
+import { can, type Capability } from '$lib/permissions';
 import type { SessionUser } from '../users';
 
 type GuardEvent = { locals: Pick<App.Locals, 'user'>; url: URL };
 
 /**
- * The security boundary: every load, action and API handler calls this first.
- * Signed out: 401 for the API, a redirect to sign-in for pages. Wrong role: 403.
+ * The security boundary: every load, action and API handler calls this first with the capability
+ * it needs (see `CAPABILITIES` in $lib/permissions). Signed out: 401 for the API, a redirect to
+ * sign-in for pages. A role without any of the capabilities: 403.
  */
-export function requireRole(event: GuardEvent, ...roles: Role[]): SessionUser {
+export function requireCapability(event: GuardEvent, ...capabilities: Capability[]): SessionUser {
 	const user = event.locals.user;
 	if (!user) {
 		if (event.url.pathname.startsWith('/api/')) error(401, { message: 'Sign in first.' });
 		const target = event.url.pathname + event.url.search;
 		redirect(303, `/signin?redirectTo=${encodeURIComponent(target)}`);
 	}
-	if (roles.length > 0 && !roles.includes(user.role)) {
+	if (capabilities.length > 0 && !capabilities.some((c) => can(user.role, c))) {
 		error(403, { message: 'Your role does not give access to this.' });
 	}
 	return user;
@@ -23,5 +24,5 @@ export function requireRole(event: GuardEvent, ...roles: Role[]): SessionUser {
 
 /** Any signed-in person, whatever the role. */
 export function requireUser(event: GuardEvent): SessionUser {
-	return requireRole(event);
+	return requireCapability(event);
 }

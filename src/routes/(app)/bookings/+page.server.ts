@@ -1,9 +1,9 @@
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { listBookings } from '$lib/server/services/pick-lists';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, 'warehouse', 'admin', 'sales');
+	requireCapability(event, 'bookings:read');
 	const today = new Date().toISOString().slice(0, 10);
 	return { bookings: await listBookings(today) };
 };

@@ -1,19 +1,18 @@
 import { json } from '@sveltejs/kit';
-import { INVENTORY_EDITORS, INVENTORY_READERS } from '$lib/inventory/roles';
 import { amplifierSchema } from '$lib/schemas/inventory-amplifiers';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { parseJsonBody } from '$lib/server/http';
 import { orHttpError } from '$lib/server/services/errors';
 import { amplifiers } from '$lib/server/services/inventory-amplifiers';
 import type { RequestHandler } from './$types';
 
 export const GET: RequestHandler = async (event) => {
-	requireRole(event, ...INVENTORY_READERS);
+	requireCapability(event, 'inventory:read');
 	return json(await amplifiers.list());
 };
 
 export const POST: RequestHandler = async (event) => {
-	const actor = requireRole(event, ...INVENTORY_EDITORS);
+	const actor = requireCapability(event, 'inventory:edit');
 	const input = await parseJsonBody(event.request, amplifierSchema);
 	return json(await orHttpError(() => amplifiers.create(input, actor.id)), { status: 201 });
 };

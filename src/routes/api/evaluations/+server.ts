@@ -1,5 +1,5 @@
 import { json } from '@sveltejs/kit';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { parseJsonBody } from '$lib/server/http';
 import { evaluationRequestSchema } from '$lib/schemas/evaluation';
 import { orHttpError } from '$lib/server/services/errors';
@@ -8,7 +8,7 @@ import type { RequestHandler } from './$types';
 
 /** Ranks every package against a request. −Infinity (a band no cabinet covers) travels as null. */
 export const POST: RequestHandler = async (event) => {
-	requireRole(event, 'sales', 'admin');
+	requireCapability(event, 'evaluations:run');
 	const input = await parseJsonBody(event.request, evaluationRequestSchema);
 	return json(await orHttpError(() => evaluateForDesk(input)));
 };

@@ -1,5 +1,5 @@
 import { json } from '@sveltejs/kit';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { parseJsonBody } from '$lib/server/http';
 import { quoteCreateSchema } from '$lib/schemas/quotes';
 import { orHttpError } from '$lib/server/services/errors';
@@ -8,12 +8,12 @@ import type { RequestHandler } from './$types';
 
 /** Staff see every quote; a client sees their own organisation's. */
 export const GET: RequestHandler = async (event) => {
-	const user = requireRole(event, 'admin', 'sales', 'client');
+	const user = requireCapability(event, 'quotes:read');
 	return json(await listQuotes(user));
 };
 
 export const POST: RequestHandler = async (event) => {
-	const user = requireRole(event, 'sales', 'admin');
+	const user = requireCapability(event, 'quotes:write');
 	const input = await parseJsonBody(event.request, quoteCreateSchema);
 	return json(await orHttpError(() => createQuote(input, user)), { status: 201 });
 };

@@ -1,8 +1,8 @@
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { listProgrammes } from '$lib/server/services/programmes';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, 'admin');
+	requireCapability(event, 'programmes:manage');
 	return { programmes: await listProgrammes() };
 };

@@ -1,20 +1,20 @@
 import { fail } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { settingsSchema } from '$lib/schemas/programmes';
 import { getSettings, settingsForForm, updateSettings } from '$lib/server/services/settings';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, 'admin');
+	requireCapability(event, 'settings:manage');
 	const form = await superValidate(settingsForForm(await getSettings()), zod4(settingsSchema));
 	return { form };
 };
 
 export const actions: Actions = {
 	default: async (event) => {
-		requireRole(event, 'admin');
+		requireCapability(event, 'settings:manage');
 		const form = await superValidate(event.request, zod4(settingsSchema));
 		if (!form.valid) return fail(400, { form });
 		await updateSettings(form.data);

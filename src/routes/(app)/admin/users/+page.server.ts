@@ -2,7 +2,7 @@ import { fail } from '@sveltejs/kit';
 import { message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { z } from 'zod';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { userCreateSchema, userUpdateSchema } from '$lib/schemas/users';
 import { DomainError } from '$lib/server/services/errors';
 import { createUser, listClientOptions, listUsers, updateUser } from '$lib/server/services/users';
@@ -11,7 +11,7 @@ import type { Actions, PageServerLoad } from './$types';
 const updateFormSchema = userUpdateSchema.extend({ id: z.coerce.number().int().positive() });
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, 'admin');
+	requireCapability(event, 'users:manage');
 	const [users, clients, form] = await Promise.all([
 		listUsers(),
 		listClientOptions(),
@@ -22,7 +22,7 @@ export const load: PageServerLoad = async (event) => {
 
 export const actions: Actions = {
 	create: async (event) => {
-		requireRole(event, 'admin');
+		requireCapability(event, 'users:manage');
 		const form = await superValidate(event.request, zod4(userCreateSchema));
 		form.data.password = '';
 		if (!form.valid) return fail(400, { form });
@@ -41,7 +41,7 @@ export const actions: Actions = {
 		}
 	},
 	update: async (event) => {
-		const actor = requireRole(event, 'admin');
+		const actor = requireCapability(event, 'users:manage');
 		const raw = Object.fromEntries(await event.request.formData());
 		const parsed = updateFormSchema.safeParse({
 			id: raw.id,

@@ -1,6 +1,6 @@
 import { fail } from '@sveltejs/kit';
 import { z } from 'zod';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { DomainError, orHttpError } from '$lib/server/services/errors';
 import { assignUnits, getPickList } from '$lib/server/services/pick-lists';
 import type { Actions, PageServerLoad } from './$types';
@@ -8,13 +8,13 @@ import type { Actions, PageServerLoad } from './$types';
 const assignment = z.array(z.coerce.number().int().positive()).max(500);
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, 'warehouse', 'admin', 'sales');
+	requireCapability(event, 'bookings:read');
 	return orHttpError(() => getPickList(Number(event.params.id)));
 };
 
 export const actions: Actions = {
 	assign: async (event) => {
-		requireRole(event, 'warehouse', 'admin');
+		requireCapability(event, 'bookings:handle');
 		const parsed = assignment.safeParse((await event.request.formData()).getAll('unit'));
 		if (!parsed.success) return fail(400, { error: 'The chosen units could not be read.' });
 		try {

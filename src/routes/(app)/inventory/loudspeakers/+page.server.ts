@@ -1,9 +1,8 @@
-import { INVENTORY_READERS } from '$lib/inventory/roles';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { loudspeakers } from '$lib/server/services/inventory-loudspeakers';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, ...INVENTORY_READERS);
+	requireCapability(event, 'inventory:read');
 	return { models: await loudspeakers.list() };
 };

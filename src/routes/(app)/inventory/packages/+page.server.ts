@@ -1,11 +1,10 @@
 import { packageBillOfMaterials } from '$lib/inventory/bill-of-materials';
-import { INVENTORY_READERS } from '$lib/inventory/roles';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { listLoadedPackages } from '$lib/server/services/inventory-packages';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, ...INVENTORY_READERS);
+	requireCapability(event, 'inventory:read');
 	const packages = await listLoadedPackages();
 	return {
 		packages: packages.map((p) => {

@@ -1,6 +1,6 @@
 import { fail } from '@sveltejs/kit';
 import { allowedActions, type QuoteAction } from '$lib/quotes/states';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { DomainError, orHttpError } from '$lib/server/services/errors';
 import { applyQuoteAction } from '$lib/server/services/quote-actions';
 import { invoiceBalance } from '$lib/server/services/balance';
@@ -8,7 +8,7 @@ import { getQuote } from '$lib/server/services/quotes';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	const user = requireRole(event, 'admin', 'sales', 'client');
+	const user = requireCapability(event, 'quotes:read');
 	event.depends('app:quotes');
 	const quote = await orHttpError(() => getQuote(Number(event.params.id), user));
 	return { quote, actions: allowedActions(quote.status) };
@@ -16,7 +16,7 @@ export const load: PageServerLoad = async (event) => {
 
 function act(action: QuoteAction) {
 	return async (event: RequestEvent) => {
-		const user = requireRole(event, 'admin', 'sales', 'client');
+		const user = requireCapability(event, 'quotes:act');
 		try {
 			const outcome = await applyQuoteAction(Number(event.params.id), action, user);
 			return { done: action, mailSent: outcome.mailSent ?? null };
@@ -33,7 +33,7 @@ export const actions: Actions = {
 	cancel: act('cancel'),
 	close: act('close'),
 	balance: async (event) => {
-		const user = requireRole(event, 'admin', 'sales');
+		const user = requireCapability(event, 'invoices:issue');
 		try {
 			const outcome = await invoiceBalance(Number(event.params.id), user);
 			return { done: 'balance', mailSent: outcome.mailSent };

@@ -1,6 +1,6 @@
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { quoteBodyFromForm, quoteCreateSchema, requestFormSchema } from '$lib/schemas/quotes';
 import { requestFormOptions, saveFromForm } from '$lib/server/services/quote-form';
 import { createQuote } from '$lib/server/services/quotes';
@@ -14,7 +14,7 @@ function nextSaturday(): string {
 }
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, 'sales', 'admin');
+	requireCapability(event, 'quotes:write');
 	const options = await requestFormOptions();
 	const date = nextSaturday();
 	const clientId = Number(event.url.searchParams.get('client')) || null;
@@ -28,7 +28,7 @@ export const load: PageServerLoad = async (event) => {
 
 export const actions: Actions = {
 	save: async (event) => {
-		const user = requireRole(event, 'sales', 'admin');
+		const user = requireCapability(event, 'quotes:write');
 		return saveFromForm(event.request, quoteCreateSchema, quoteBodyFromForm, (input) => createQuote(input, user));
 	}
 };

@@ -1,6 +1,5 @@
 import { json } from '@sveltejs/kit';
-import { INVENTORY_EDITORS } from '$lib/inventory/roles';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { readCsvBody } from '$lib/server/inventory-http';
 import { orHttpError } from '$lib/server/services/errors';
 import { applyImport, previewImport } from '$lib/server/services/inventory-csv';
@@ -8,7 +7,7 @@ import type { RequestHandler } from './$types';
 
 /** Imports all rows or none; with `?preview=1` only reports what it would do, row by row. */
 export const POST: RequestHandler = async (event) => {
-	const actor = requireRole(event, ...INVENTORY_EDITORS);
+	const actor = requireCapability(event, 'inventory:edit');
 	const text = await readCsvBody(event.request);
 	if (event.url.searchParams.has('preview')) return json(await previewImport('amplifiers', text));
 	return json(await orHttpError(() => applyImport('amplifiers', text, actor.id)));

@@ -1,25 +1,24 @@
 import { json } from '@sveltejs/kit';
-import { INVENTORY_EDITORS, INVENTORY_READERS } from '$lib/inventory/roles';
 import { stockUnitPatchSchema } from '$lib/schemas/inventory-units';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { parseJsonBody } from '$lib/server/http';
 import { orHttpError } from '$lib/server/services/errors';
 import { units } from '$lib/server/services/inventory-resources';
 import type { RequestHandler } from './$types';
 
 export const GET: RequestHandler = async (event) => {
-	requireRole(event, ...INVENTORY_READERS);
+	requireCapability(event, 'inventory:read');
 	return json(await orHttpError(() => units.get(Number(event.params.id))));
 };
 
 export const PATCH: RequestHandler = async (event) => {
-	const actor = requireRole(event, ...INVENTORY_EDITORS);
+	const actor = requireCapability(event, 'inventory:edit');
 	const changes = await parseJsonBody(event.request, stockUnitPatchSchema);
 	return json(await orHttpError(() => units.update(Number(event.params.id), changes, actor.id)));
 };
 
 export const DELETE: RequestHandler = async (event) => {
-	requireRole(event, ...INVENTORY_EDITORS);
+	requireCapability(event, 'inventory:edit');
 	await orHttpError(() => units.remove(Number(event.params.id)));
 	return new Response(null, { status: 204 });
 };

@@ -1,14 +1,14 @@
 import { error, fail, redirect } from '@sveltejs/kit';
 import { setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { programmeFormSchema, programmeFromForm, programmeToForm } from '$lib/schemas/programmes';
 import { DomainError } from '$lib/server/services/errors';
 import { findProgramme, saveProgramme } from '$lib/server/services/programmes';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, 'admin');
+	requireCapability(event, 'programmes:manage');
 	if (event.params.slug === 'new') return { form: await superValidate(zod4(programmeFormSchema)), isNew: true };
 	const programme = await findProgramme(event.params.slug);
 	if (!programme) error(404, { message: 'No such programme profile.' });
@@ -17,7 +17,7 @@ export const load: PageServerLoad = async (event) => {
 
 export const actions: Actions = {
 	default: async (event) => {
-		requireRole(event, 'admin');
+		requireCapability(event, 'programmes:manage');
 		const form = await superValidate(event.request, zod4(programmeFormSchema));
 		if (!form.valid) return fail(400, { form });
 		const existing = event.params.slug === 'new' ? null : await findProgramme(event.params.slug);

@@ -1,7 +1,6 @@
 import { packageBillOfMaterials } from '$lib/inventory/bill-of-materials';
 import { channelLoadOhm } from '$lib/inventory/channel-plan';
-import { INVENTORY_EDITORS, INVENTORY_READERS } from '$lib/inventory/roles';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { deleteOrExplain } from '$lib/server/inventory-pages';
 import { orHttpError } from '$lib/server/services/errors';
 import { listHistory } from '$lib/server/services/inventory-history';
@@ -9,7 +8,7 @@ import { deletePackage, getLoadedPackage } from '$lib/server/services/inventory-
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, ...INVENTORY_READERS);
+	requireCapability(event, 'inventory:read');
 	const id = Number(event.params.id);
 	const pkg = await orHttpError(() => getLoadedPackage(id));
 	return {
@@ -22,7 +21,7 @@ export const load: PageServerLoad = async (event) => {
 
 export const actions: Actions = {
 	delete: async (event) => {
-		requireRole(event, ...INVENTORY_EDITORS);
+		requireCapability(event, 'inventory:edit');
 		return deleteOrExplain(() => deletePackage(Number(event.params.id)), '/inventory/packages');
 	}
 };

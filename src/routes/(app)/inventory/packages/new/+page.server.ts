@@ -1,9 +1,8 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { INVENTORY_EDITORS } from '$lib/inventory/roles';
 import { packageSchema } from '$lib/schemas/inventory-packages';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { packageFormOptions, refusal } from '$lib/server/inventory-pages';
 import { createPackage } from '$lib/server/services/inventory-packages';
 import type { Actions, PageServerLoad } from './$types';
@@ -11,14 +10,14 @@ import type { Actions, PageServerLoad } from './$types';
 const emptyGroup = { loudspeakerModelId: 0, count: 1, stacks: 1, amplifierModelId: 0, cabinetsPerChannel: 1, flown: false };
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, ...INVENTORY_EDITORS);
+	requireCapability(event, 'inventory:edit');
 	const form = await superValidate({ active: true, groups: [emptyGroup] }, zod4(packageSchema), { errors: false });
 	return { form, ...(await packageFormOptions()) };
 };
 
 export const actions: Actions = {
 	default: async (event) => {
-		const actor = requireRole(event, ...INVENTORY_EDITORS);
+		const actor = requireCapability(event, 'inventory:edit');
 		const form = await superValidate(event.request, zod4(packageSchema));
 		if (!form.valid) return fail(400, { form });
 		let id: number;

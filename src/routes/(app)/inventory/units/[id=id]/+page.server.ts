@@ -1,9 +1,9 @@
+import { can } from '$lib/permissions';
 import { fail, redirect } from '@sveltejs/kit';
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { canEditInventory, INVENTORY_EDITORS, INVENTORY_READERS } from '$lib/inventory/roles';
 import { stockUnitSchema } from '$lib/schemas/inventory-units';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { deleteOrExplain, refusal, unitFormOptions } from '$lib/server/inventory-pages';
 import { orHttpError } from '$lib/server/services/errors';
 import { listHistory } from '$lib/server/services/inventory-history';
@@ -12,10 +12,10 @@ import type { Actions, PageServerLoad } from './$types';
 
 /** One unit: its details and history for everyone on staff, the edit form for the warehouse. */
 export const load: PageServerLoad = async (event) => {
-	const user = requireRole(event, ...INVENTORY_READERS);
+	const user = requireCapability(event, 'inventory:read');
 	const id = Number(event.params.id);
 	const unit = await orHttpError(() => getUnit(id));
-	const editing = canEditInventory(user.role)
+	const editing = can(user.role, 'inventory:edit')
 		? { form: await superValidate(unit, zod4(stockUnitSchema)), ...(await unitFormOptions()) }
 		: null;
 	return { unit, history: await listHistory('unit', id), editing };
@@ -23,7 +23,7 @@ export const load: PageServerLoad = async (event) => {
 
 export const actions: Actions = {
 	save: async (event) => {
-		const actor = requireRole(event, ...INVENTORY_EDITORS);
+		const actor = requireCapability(event, 'inventory:edit');
 		const id = Number(event.params.id);
 		const form = await superValidate(event.request, zod4(stockUnitSchema));
 		if (!form.valid) return fail(400, { form });
@@ -35,7 +35,7 @@ export const actions: Actions = {
 		redirect(303, `/inventory/units/${id}`);
 	},
 	delete: async (event) => {
-		requireRole(event, ...INVENTORY_EDITORS);
+		requireCapability(event, 'inventory:edit');
 		return deleteOrExplain(() => deleteUnit(Number(event.params.id)), '/inventory/units');
 	}
 };

@@ -1,22 +1,21 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { INVENTORY_EDITORS } from '$lib/inventory/roles';
 import { stockUnitSchema } from '$lib/schemas/inventory-units';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { refusal, unitFormOptions } from '$lib/server/inventory-pages';
 import { createUnit } from '$lib/server/services/inventory-units';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	requireRole(event, ...INVENTORY_EDITORS);
+	requireCapability(event, 'inventory:edit');
 	const form = await superValidate({ modelType: 'loudspeaker', modelId: 0, status: 'ready' }, zod4(stockUnitSchema), { errors: false });
 	return { form, ...(await unitFormOptions()) };
 };
 
 export const actions: Actions = {
 	default: async (event) => {
-		const actor = requireRole(event, ...INVENTORY_EDITORS);
+		const actor = requireCapability(event, 'inventory:edit');
 		const form = await superValidate(event.request, zod4(stockUnitSchema));
 		if (!form.valid) return fail(400, { form });
 		let id: number;

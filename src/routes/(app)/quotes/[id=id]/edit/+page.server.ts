@@ -2,7 +2,7 @@ import { error } from '@sveltejs/kit';
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { isEditable } from '$lib/quotes/states';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { evaluationBodyFromForm, formFromRequest, quoteReviseSchema, requestFormSchema } from '$lib/schemas/quotes';
 import { orHttpError } from '$lib/server/services/errors';
 import { requestFormOptions, saveFromForm } from '$lib/server/services/quote-form';
@@ -10,7 +10,7 @@ import { getQuote, reviseQuote } from '$lib/server/services/quotes';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	const user = requireRole(event, 'sales', 'admin');
+	const user = requireCapability(event, 'quotes:write');
 	const quote = await orHttpError(() => getQuote(Number(event.params.id), user));
 	if (!isEditable(quote.status)) error(409, { message: `A quote that is ${quote.status} can no longer be edited.` });
 	const values = {
@@ -26,7 +26,7 @@ export const load: PageServerLoad = async (event) => {
 
 export const actions: Actions = {
 	save: async (event) => {
-		const user = requireRole(event, 'sales', 'admin');
+		const user = requireCapability(event, 'quotes:write');
 		const id = Number(event.params.id);
 		const toBody = (f: Parameters<typeof evaluationBodyFromForm>[0]) => ({
 			eventName: f.eventName,

@@ -1,5 +1,5 @@
 import { json } from '@sveltejs/kit';
-import { requireRole } from '$lib/server/auth/guards';
+import { requireCapability } from '$lib/server/auth/guards';
 import { parseJsonBody } from '$lib/server/http';
 import { quoteActionSchema } from '$lib/schemas/quotes';
 import { orHttpError } from '$lib/server/services/errors';
@@ -8,7 +8,7 @@ import type { RequestHandler } from './$types';
 
 /** { action: send | accept | cancel | close }; an illegal move for the quote's state is 409. */
 export const POST: RequestHandler = async (event) => {
-	const user = requireRole(event, 'sales', 'admin', 'client');
+	const user = requireCapability(event, 'quotes:act');
 	const { action } = await parseJsonBody(event.request, quoteActionSchema);
 	return json(await orHttpError(() => applyQuoteAction(Number(event.params.id), action, user)));
 };
