@@ -1,7 +1,10 @@
 /**
  * Pure number helpers for the SVG charts: scales, ticks, paths and the text we print beside values.
- * No DOM and no Svelte here, so all of it is unit-tested on its own.
+ * No DOM and no Svelte here, so all of it is unit-tested on its own. Scales and paths come from
+ * d3-scale and d3-shape; the ticks, domains and text are ours (dB axes step in 5, 10 or 20 dB).
  */
+import { scaleLinear, scaleLog } from 'd3-scale';
+import { line } from 'd3-shape';
 
 export type Weighting = 'A' | 'C' | 'Z';
 export type DistanceUnit = 'm' | 'ft';
@@ -18,23 +21,28 @@ export function clamp(value: number, min: number, max: number): number {
 	return Math.min(max, Math.max(min, value));
 }
 
-/** Maps a domain linearly onto a range (either may run backwards, as the y axis does). */
+/**
+ * Maps a domain linearly onto a range (either may run backwards, as the y axis does); d3-scale's
+ * linear scale, except that a flat domain puts everything at the range's start rather than its middle.
+ */
 export function linearScale(
 	[d0, d1]: readonly [number, number],
-	[r0, r1]: readonly [number, number]
+	range: readonly [number, number]
 ): (value: number) => number {
-	const span = d1 - d0 || 1; // a flat domain would divide by zero; put everything at r0
-	return (value) => r0 + ((value - d0) / span) * (r1 - r0);
+	const scale = scaleLinear()
+		.domain(d1 === d0 ? [d0, d0 + 1] : [d0, d1])
+		.range([range[0], range[1]]);
+	return (value) => scale(value);
 }
 
-/** Maps a positive domain logarithmically onto a range. */
+/** Maps a positive domain logarithmically onto a range (d3-scale's log scale). */
 export function logScale(
 	[d0, d1]: readonly [number, number],
 	range: readonly [number, number]
 ): (value: number) => number {
 	if (!(d0 > 0 && d1 > 0)) throw new RangeError('A log scale needs a positive domain');
-	const toLinear = linearScale([Math.log10(d0), Math.log10(d1)], range);
-	return (value) => toLinear(Math.log10(value));
+	const scale = scaleLog().domain([d0, d1]).range([range[0], range[1]]);
+	return (value) => scale(value);
 }
 
 /** Mantissa sets from densest to sparsest; the first that fits within maxCount ticks is used. */
@@ -104,25 +112,22 @@ export function dbDomain(
 	return [lo, hi];
 }
 
+type PlotPoint = { x: number; y: number | null };
+
+/** d3-shape's line, lifting the pen over points that cannot be drawn; coordinates to 0.01 px. */
+const plotLine = line<PlotPoint>()
+	.defined((p) => isDrawable(p.x) && isDrawable(p.y))
+	.x((p) => p.x)
+	.y((p) => p.y as number)
+	.digits(2);
+
 /**
  * An SVG path through the points, lifting the pen over undrawable ones, so a package that covers
  * nothing at some distances leaves a gap rather than a line to −Infinity. Empty string if none.
  */
-export function linePath(points: readonly { x: number; y: number | null }[]): string {
-	let path = '';
-	let penDown = false;
-	for (const { x, y } of points) {
-		if (!isDrawable(x) || !isDrawable(y)) {
-			penDown = false;
-			continue;
-		}
-		path += `${penDown ? 'L' : 'M'}${round2(x)},${round2(y)}`;
-		penDown = true;
-	}
-	return path;
+export function linePath(points: readonly PlotPoint[]): string {
+	return plotLine(points as PlotPoint[]) ?? '';
 }
-
-const round2 = (v: number) => Math.round(v * 100) / 100;
 
 /** Typographic minus: it reads as "minus" to screen readers and lines up with "+". */
 const MINUS = '\u2212';
