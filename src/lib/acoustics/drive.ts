@@ -6,15 +6,18 @@
  * drive gives drive_b + contCap_b(p) at any other point p. Bands the programme lacks, or no group
  * covers, are not driven (NaN) and make no sound.
  */
-import { bandAbsorption, normaliseAir } from './absorption';
+import { airConstants } from './absorption';
 import { BAND_COUNT } from './bands';
 import { energyToLevels, fillEnergy, type Environment } from './field';
 import type { PreparedPackage } from './groups';
 import { requirementFor, type Requirement } from './requirement';
 import type { CheckedSite } from './site';
-import { speedOfSound } from './units';
 import type { QuoteRequest } from './types';
 
+/**
+ * The package at the position. Its arrays are module-level scratch, overwritten by the next call:
+ * read them before evaluating again (evaluatePackage and levelGrid copy what they return).
+ */
 export interface DrivenPackage {
 	env: Environment;
 	requirement: Requirement;
@@ -27,27 +30,32 @@ export interface DrivenPackage {
 	drive: Float64Array;
 }
 
-export function environmentFor(request: QuoteRequest, site: CheckedSite | null): Environment {
-	const air = normaliseAir(request.air);
-	return {
-		alphas: bandAbsorption(air),
-		inverseC: 1 / speedOfSound(air.temperatureC),
-		freeField: site === null,
-		groundFactor: site === null ? null : site.groundFactor
-	};
-}
+const driven: DrivenPackage = {
+	env: { alphas: new Float64Array(BAND_COUNT), inverseC: 0, freeField: true, groundFactor: null },
+	requirement: { bandIndices: [], requiredDb: [], crestFactorDb: 0 },
+	continuousDb: new Float64Array(BAND_COUNT),
+	peakDb: new Float64Array(BAND_COUNT),
+	contributions: new Float64Array(4 * BAND_COUNT),
+	drive: new Float64Array(BAND_COUNT)
+};
 
-/** The caller has checked the request (and site). */
+/** The caller has checked the request (and site); air and programme are checked here. */
 export function drivePackage(
 	prepared: PreparedPackage,
 	request: QuoteRequest,
 	site: CheckedSite | null
 ): DrivenPackage {
-	const env = environmentFor(request, site);
+	const air = airConstants(request.air);
+	const env = driven.env;
+	env.alphas = air.alphas;
+	env.inverseC = air.inverseC;
+	env.freeField = site === null;
+	env.groundFactor = site === null ? null : site.groundFactor;
 	const requirement = requirementFor(request.programme, request.targetDb, request.weighting);
-	const continuousDb = new Float64Array(BAND_COUNT);
-	const peakDb = new Float64Array(BAND_COUNT);
-	const contributions = new Float64Array(prepared.groups.length * BAND_COUNT);
+	driven.requirement = requirement;
+	const { continuousDb, peakDb, drive } = driven;
+	if (driven.contributions.length < prepared.groups.length * BAND_COUNT)
+		driven.contributions = new Float64Array(prepared.groups.length * BAND_COUNT);
 	// The position is on the aim bearing: off-axis angle 0 exactly.
 	const heightM = site === null ? 0 : site.positionHeightM;
 	const rRef = fillEnergy(
@@ -58,14 +66,14 @@ export function drivePackage(
 		heightM,
 		continuousDb,
 		peakDb,
-		contributions
+		driven.contributions
 	);
 	energyToLevels(continuousDb, env.alphas, rRef);
 	energyToLevels(peakDb, env.alphas, rRef);
-	const drive = new Float64Array(BAND_COUNT).fill(Number.NaN);
+	drive.fill(Number.NaN);
 	for (let n = 0; n < requirement.bandIndices.length; n++) {
 		const b = requirement.bandIndices[n];
 		if (continuousDb[b] !== -Infinity) drive[b] = requirement.requiredDb[n] - continuousDb[b];
 	}
-	return { env, requirement, continuousDb, peakDb, contributions, drive };
+	return driven;
 }

@@ -11,7 +11,8 @@
 import { BAND_COUNT } from './bands';
 import { fillDirectivity } from './directivity';
 import {
-	addGroundAttenuation,
+	addMiddleRegion,
+	addRegion,
 	distanceTerms,
 	heightTerms,
 	type DistanceTerms,
@@ -35,9 +36,11 @@ export interface Environment {
 const NEG_DB = -Math.LN10 / 10;
 
 const attenuation = new Float64Array(BAND_COUNT);
+/** A_r of the point's own region: the same for every group, so worked out once per point. */
+const receiverRegion = new Float64Array(BAND_COUNT);
 const distance: DistanceTerms = { near: 0, far: 0 };
 let receiverTermsHeight = Number.NaN;
-let receiverTerms: HeightTerms = heightTerms(0);
+const receiverTerms: HeightTerms = heightTerms(0);
 
 /**
  * Fills continuousOut (and peakOut, contributionsOut when given) with the energy sums at a point
@@ -63,9 +66,11 @@ export function fillEnergy(
 	if (ground) {
 		distanceTerms(dpM, distance);
 		if (hM !== receiverTermsHeight) {
-			receiverTerms = heightTerms(hM);
+			heightTerms(hM, receiverTerms);
 			receiverTermsHeight = hM;
 		}
+		receiverRegion.fill(0);
+		addRegion(receiverTerms, distance, G, receiverRegion);
 	}
 	continuousOut.fill(0);
 	if (peakOut !== null) peakOut.fill(0);
@@ -77,16 +82,11 @@ export function fillEnergy(
 			r = Math.sqrt(dpM * dpM + dh * dh);
 			if (r < 1) r = 1;
 			fillDirectivity(g.directivity, phiDeg, attenuation);
-			if (ground)
-				addGroundAttenuation(
-					g.groundTerms,
-					receiverTerms,
-					g.heightM + hM,
-					dpM,
-					distance,
-					G,
-					attenuation
-				);
+			if (ground) {
+				for (let b = 0; b < BAND_COUNT; b++) attenuation[b] += receiverRegion[b];
+				addRegion(g.groundTerms, distance, G, attenuation);
+				addMiddleRegion(g.heightM + hM, dpM, G, attenuation);
+			}
 		}
 		const extra = r - rRef;
 		const inverseSquare = 1 / (r * r);

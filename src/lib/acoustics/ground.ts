@@ -20,13 +20,12 @@ export interface HeightTerms {
 	d: number;
 }
 
-export function heightTerms(h: number): HeightTerms {
-	return {
-		a: Math.exp(-0.12 * (h - 5) * (h - 5)),
-		b: Math.exp(-0.09 * h * h),
-		c: Math.exp(-0.46 * h * h),
-		d: Math.exp(-0.9 * h * h)
-	};
+export function heightTerms(h: number, out: HeightTerms = { a: 0, b: 0, c: 0, d: 0 }): HeightTerms {
+	out.a = Math.exp(-0.12 * (h - 5) * (h - 5));
+	out.b = Math.exp(-0.09 * h * h);
+	out.c = Math.exp(-0.46 * h * h);
+	out.d = Math.exp(-0.9 * h * h);
+	return out;
 }
 
 /** The distance factors of Table 3: 1 − e^(−d_p/50) and 1 − e^(−2.8·10⁻⁶·d_p²). */
@@ -46,7 +45,7 @@ export function distanceTerms(dpM: number, out: DistanceTerms): DistanceTerms {
  * a′ = 1.5 + 3.0·e^(−0.12(h−5)²)·near + 5.7·e^(−0.09h²)·far; b′ = 1.5 + 8.6·e^(−0.09h²)·near;
  * c′ = 1.5 + 14.0·e^(−0.46h²)·near; d′ = 1.5 + 5.0·e^(−0.9h²)·near.
  */
-function addRegion(h: HeightTerms, dist: DistanceTerms, G: number, out: Float64Array): void {
+export function addRegion(h: HeightTerms, dist: DistanceTerms, G: number, out: Float64Array): void {
 	out[0] += -1.5;
 	out[1] += -1.5;
 	out[2] += -1.5 + G * (1.5 + 3.0 * h.a * dist.near + 5.7 * h.b * dist.far);
@@ -74,6 +73,16 @@ export function addGroundAttenuation(
 ): void {
 	addRegion(source, dist, G, out);
 	addRegion(receiver, dist, G, out);
+	addMiddleRegion(sumOfHeightsM, dpM, G, out);
+}
+
+/** A_m in every band added into `out`: −3q at 63 Hz (and 31.5), −3q·(1 − G) above. */
+export function addMiddleRegion(
+	sumOfHeightsM: number,
+	dpM: number,
+	G: number,
+	out: Float64Array
+): void {
 	const reach = 30 * sumOfHeightsM;
 	if (dpM <= reach) return;
 	const q = 1 - reach / dpM;

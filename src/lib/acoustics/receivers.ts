@@ -129,16 +129,18 @@ export function limitsOf(
 	let ok = true;
 	let maxTargetDb: number | null = null;
 	let bindingReceiver: string | null = null;
-	const consider = (name: string, margin: number, maxTarget: number) => {
+	for (let i = 0; i <= receivers.length; i++) {
+		const last = i === receivers.length;
+		if (last && boundary === null) break;
+		const margin = last ? boundary!.marginDb : receivers[i].marginDb;
+		if (margin === null) continue;
+		const maxTarget = last ? boundary!.maxTargetDb : (receivers[i].maxTargetDb as number);
 		if (!(margin >= 0)) ok = false;
 		if (maxTargetDb === null || maxTarget < maxTargetDb) {
 			maxTargetDb = maxTarget;
-			bindingReceiver = name;
+			bindingReceiver = last ? 'boundary' : receivers[i].name;
 		}
-	};
-	for (const r of receivers)
-		if (r.marginDb !== null) consider(r.name, r.marginDb, r.maxTargetDb as number);
-	if (boundary !== null) consider('boundary', boundary.marginDb, boundary.maxTargetDb);
+	}
 	return { ok, maxTargetDb, bindingReceiver };
 }
 
