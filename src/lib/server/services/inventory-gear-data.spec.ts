@@ -123,7 +123,7 @@ describe('package group placement (height, spacing, own pattern)', () => {
 		expect(loaded.groups[0]).toMatchObject({ spacingM: 12, directivity: cardioid });
 		const entry = (await listHistory('package', created.id)).find((h) => h.field === 'groups')!;
 		expect(entry.oldValue).toContain('0.6 m high, outer stacks 10 m apart');
-		expect(entry.newValue).toContain('outer stacks 12 m apart, own pattern {"anglesDeg":[0,90,180]');
+		expect(entry.newValue).toContain('outer stacks 12 m apart, own pattern at 0 90 180°; 63 Hz: 0 6 18; 125 Hz: 0 6 15');
 		expect((await getQuote(quote.id, desk)).needsRecheck).toBe(true);
 		expect((await getPackage(created.id)).groups[0].heightM).toBe(0.6);
 	});

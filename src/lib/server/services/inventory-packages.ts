@@ -1,10 +1,11 @@
 import type { Transaction } from 'sequelize';
 import { channelPlanErrors } from '$lib/inventory/channel-plan';
+import { directivityText } from '$lib/inventory/gear-text';
 import type { LoadedPackage, PackageRow } from '$lib/inventory/types';
 import { packageSchema, type PackageInput, type PackagePatch } from '$lib/schemas/inventory-packages';
 import { AmplifierModel, LoudspeakerModel, Package, PackageGroup } from '../db/models';
 import { DomainError } from './errors';
-import { canonicalJson, plainRow, translateDbError, validOrThrow, withTransaction } from './inventory-common';
+import { plainRow, translateDbError, validOrThrow, withTransaction } from './inventory-common';
 import { deleteHistory, recordChanges, recordCreation } from './inventory-history';
 import { flagQuotesForPackageChange } from './recheck';
 
@@ -96,7 +97,7 @@ function acousticText(g: GroupValues): string {
 	const placement = [
 		g.heightM != null ? `${g.heightM} m high` : '',
 		g.spacingM != null ? `outer stacks ${g.spacingM} m apart` : '',
-		g.directivity ? `own pattern ${canonicalJson(g.directivity)}` : ''
+		g.directivity ? `own pattern ${directivityText(g.directivity)}` : ''
 	].filter(Boolean);
 	return [`${g.stacks}×${g.count} of loudspeaker #${g.loudspeakerModelId} on amplifier #${g.amplifierModelId}, ${g.cabinetsPerChannel} per channel`, ...placement].join(', ');
 }
