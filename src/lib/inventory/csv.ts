@@ -46,8 +46,14 @@ function nestRow(flat: Record<string, unknown>): Record<string, unknown> {
 			row[column] = value;
 			continue;
 		}
-		const inner = (row[column.slice(0, dot)] ??= {}) as Record<string, unknown>;
-		if (value !== null) inner[column.slice(dot + 1)] = value;
+		const field = column.slice(0, dot);
+		if (value === null) {
+			row[field] ??= null; // every cell empty: the field is "not given"
+			continue;
+		}
+		const inner = (row[field] ??= {}) as Record<string, unknown> | null;
+		if (inner) inner[column.slice(dot + 1)] = value;
+		else row[field] = { [column.slice(dot + 1)]: value };
 	}
 	return row;
 }

@@ -42,9 +42,9 @@ describe('directivity table schema', () => {
 });
 
 describe('band response and compression', () => {
-	it('takes only the nine octave bands; an empty response means not given', () => {
+	it('takes only the nine octave bands; null means not given', () => {
 		expect(bandResponseSchema.parse({ '31.5': -12, '63': -3, '125': 0 })).toEqual({ '31.5': -12, '63': -3, '125': 0 });
-		expect(bandResponseSchema.parse({})).toBeNull();
+		expect(bandResponseSchema.parse(null)).toBeNull();
 		expect(bandResponseSchema.safeParse({ '16': -20 }).success).toBe(false);
 		expect(bandResponseSchema.safeParse({ '63': 'loud' }).success).toBe(false);
 	});

@@ -23,10 +23,9 @@ const finite = z.number({ error: 'Enter a number' }).refine(Number.isFinite, 'En
 /** Output in a band relative to the sensitivity (0 = flat); only the nine octave bands. */
 export const bandResponseSchema = z
 	.partialRecord(z.enum(NOMINAL_BANDS, { error: 'Only the octave bands 31.5 … 8000 Hz' }), finite.min(-40, 'At least −40 dB').max(20, 'At most +20 dB'))
-	.nullable()
-	// An empty response is "not given", so the model uses its flat default and history shows no value.
-	.transform((r) => (r && Object.keys(r).length > 0 ? r : null))
-	.optional();
+	// No transform (forms derive a JSON Schema from this, which cannot hold one): the form and the CSV
+	// reader send null for an empty response, and the spec mapping treats {} as "not given" too.
+	.nullish();
 
 /**
  * Power compression at full continuous power. The v2 fields are optional keys (absent or null: not
