@@ -2,6 +2,7 @@ import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
 import { csvResponse, readCsvBody } from '$lib/server/inventory-http';
 import { orHttpError } from '$lib/server/services/errors';
+import { loudspeakers } from '$lib/server/services/inventory-loudspeakers';
 import { applyDirectivityImport, exportDirectivityCsv, previewDirectivityImport } from '$lib/server/services/inventory-directivity';
 import type { RequestHandler } from './$types';
 
@@ -16,6 +17,7 @@ export const GET: RequestHandler = async (event) => {
 export const POST: RequestHandler = async (event) => {
 	const actor = requireCapability(event, 'inventory:edit');
 	const id = Number(event.params.id);
+	await orHttpError(() => loudspeakers.get(id)); // 404 before reading a file meant for no model
 	const text = await readCsvBody(event.request);
 	if (event.url.searchParams.has('preview')) return json(await orHttpError(() => previewDirectivityImport(id, text)));
 	return json(await orHttpError(() => applyDirectivityImport(id, text, actor.id)));
