@@ -1,6 +1,6 @@
 import Papa from 'papaparse';
 import type { z } from 'zod';
-import { NOMINAL_BANDS } from '$lib/schemas/programmes';
+import { NOMINAL_BANDS } from '../schemas/programmes'; // relative: the e2e tests import this file outside Vite
 
 /**
  * CSV for loudspeaker and amplifier models: one header row of field names, one model per row.
