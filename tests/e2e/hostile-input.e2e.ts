@@ -97,6 +97,7 @@ const TARGETS: Record<string, Target> = {
 		columns: AMPLIFIER_CSV_COLUMNS,
 		schema: amplifierSchema
 	},
+	'POST /api/loudspeakers/[id=id]/directivity.csv': { as: 'warehouse', body: 'ignored', status: 404 }, // no such model; its CSV checks are in gear-data-api
 	'POST /api/loudspeakers/[id=id]/attachments': { as: 'warehouse', body: 'multipart' },
 	'POST /api/amplifiers/[id=id]/attachments': { as: 'warehouse', body: 'multipart' }
 };

@@ -6,11 +6,16 @@ import { loudspeakerBody } from './inventory-helpers';
 
 let browser: Browser;
 let modelId: number;
+let tableModelId: number;
+// A test table (not demo data): seven angles, two bands.
+const table = { anglesDeg: [0, 30, 60, 90, 120, 150, 180], bandsDb: { '125': [0, 0, 1, 2, 3, 4, 5], '1000': [0, 2, 6, 11, 14, 16, 17] } };
 beforeAll(async () => {
 	browser = await launchBrowser();
 	const cookie = await sessionCookie('warehouse@kestrel-yard.test');
 	const created = await api('/api/loudspeakers', { cookie, method: 'POST', body: loudspeakerBody({ sensitivityDb: 96 }) });
 	modelId = created.json.id;
+	const withTable = await api('/api/loudspeakers', { cookie, method: 'POST', body: loudspeakerBody({ directivity: table }) });
+	tableModelId = withTable.json.id;
 });
 afterAll(async () => {
 	await browser?.close();
@@ -38,6 +43,42 @@ describe('inventory in the browser', () => {
 		await row.waitFor();
 		await expect(row.textContent()).resolves.toMatch(/Sam Ilunga.*Sensitivity \(dB\).*96\s*→\s*98\.5/s);
 		await screenshot(page, 'inventory-loudspeaker-history-1280');
+		await page.close();
+	});
+
+	it('a warehouse user edits one directivity cell with the keyboard and sees it in the spec history', async () => {
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, 'warehouse@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/inventory/loudspeakers/${tableModelId}/edit`);
+		// Arrow keys move between cells: from 125 Hz at 60° down to 1 kHz at 60°.
+		await page.getByLabel('125 Hz at 60°, dB').click();
+		await page.keyboard.press('ArrowDown');
+		expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).toBe('1 kHz at 60°, dB');
+		await page.keyboard.type('7.5');
+		await page.getByRole('button', { name: 'Save changes' }).click();
+		await page.waitForURL(`${BASE_URL}/inventory/loudspeakers/${tableModelId}`);
+		const row = page.getByTestId('spec-history').getByRole('row').filter({ hasText: 'Directivity (polar data)' });
+		await row.waitFor();
+		await expect(row.textContent()).resolves.toMatch(/1 kHz: 0 2 6 11 14 16 17.*→.*1 kHz: 0 2 7\.5 11 14 16 17/s);
+		await expect(page.getByTestId('directivity-table').textContent()).resolves.toContain('7.5');
+		await screenshot(page, 'inventory-directivity-history-1280');
+		await page.close();
+	});
+
+	it('on a phone the directivity grid scrolls inside its own box and says so', async () => {
+		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+		await signIn(page, 'warehouse@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/inventory/loudspeakers/${tableModelId}/edit`);
+		const grid = page.getByRole('region', { name: 'Directivity (polar data), a table you can scroll sideways' });
+		await grid.waitFor();
+		const sizes = await grid.evaluate((el) => ({ scroll: el.scrollWidth, client: el.clientWidth }));
+		expect(sizes.scroll).toBeGreaterThan(sizes.client);
+		await page.getByText('Scroll sideways for more angles →').waitFor();
+		expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBe(0);
+		await page.getByText('Scroll sideways for more angles →').scrollIntoViewIfNeeded();
+		await screenshot(page, 'inventory-directivity-grid-390');
 		await page.close();
 	});
 

@@ -64,6 +64,8 @@ const TABLE: Record<string, Row> = {
 	'GET /api/loudspeakers/[id=id]/attachments': { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
 	'POST /api/loudspeakers/[id=id]/attachments':{ out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
 	'GET /api/loudspeakers/[id=id]/history':     { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'GET /api/loudspeakers/[id=id]/directivity.csv':  { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'POST /api/loudspeakers/[id=id]/directivity.csv': { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
 
 	'GET /api/amplifiers':                       { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
 	'POST /api/amplifiers':                      { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },

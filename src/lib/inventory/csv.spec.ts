@@ -6,7 +6,7 @@ import { AMPLIFIER_CSV_COLUMNS, LOUDSPEAKER_CSV_COLUMNS, csvErrorEnvelope, parse
 const speakers = [
 	{ name: 'Plain top', maker: 'Maker, Ltd', kind: 'full-range', sensitivityDb: 97.3, sensitivityRef: '2.83V', impedanceOhm: 8, powerContinuousW: 500, powerPeakW: null, maxSplContinuousDb: 124.5, maxSplPeakDb: null, dispersionHDeg: 90, dispersionVDeg: 50, lowHz: 55, highHz: 19000, heightM: null, weightKg: 0.1, dayRateMinor: 3000, replacementValueMinor: 150000, notes: 'Says "hello",\nover two lines' },
 	{ name: '=cmd|calc', maker: "'quoted", kind: 'line-array-element', sensitivityDb: 104, sensitivityRef: '1W', impedanceOhm: 16, powerContinuousW: 1000, powerPeakW: 4000, maxSplContinuousDb: 133, maxSplPeakDb: 139, dispersionHDeg: 90, dispersionVDeg: 10, lowHz: 50, highHz: 18000, heightM: 0.38, weightKg: 62, dayRateMinor: 0, replacementValueMinor: 480000, notes: '-starts with a dash' }
-];
+].map((s, i) => ({ ...s, compressionDb: i === 0 ? null : 1.5, bandResponseDb: i === 0 ? null : { '31.5': -18, '63': -3.5, '125': -0.5 } }));
 
 describe('models CSV', () => {
 	it('round-trips exactly: serialise → parse gives the same values, and serialising again the same text', () => {
@@ -17,6 +17,14 @@ describe('models CSV', () => {
 		expect(parsed.rows.map((r) => r.errors)).toEqual([{}, {}]);
 		expect(parsed.rows.map((r) => r.data)).toEqual(speakers);
 		expect(serialiseCsv(parsed.rows.map((r) => r.data!), LOUDSPEAKER_CSV_COLUMNS)).toBe(text);
+	});
+
+	it('carries compression and the band response as one column per band', () => {
+		const [header, , second] = serialiseCsv(speakers, LOUDSPEAKER_CSV_COLUMNS).split('\r\n');
+		expect(header).toContain('compressionDb,bandResponseDb.31.5,bandResponseDb.63,bandResponseDb.125,bandResponseDb.250');
+		expect(second).toContain(',1.5,-18,-3.5,-0.5,,,,,,,');
+		const bad = serialiseCsv([{ ...speakers[1], compressionDb: -1, bandResponseDb: { '63': 'loud' } }], LOUDSPEAKER_CSV_COLUMNS);
+		expect(Object.keys(parseModelsCsv(bad, LOUDSPEAKER_CSV_COLUMNS, loudspeakerSchema).rows[0].errors).sort()).toEqual(['bandResponseDb.63', 'compressionDb']);
 	});
 
 	it('writes a cell a spreadsheet would run as a formula with a leading apostrophe', () => {

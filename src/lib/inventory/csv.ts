@@ -1,15 +1,19 @@
 import Papa from 'papaparse';
 import type { z } from 'zod';
+import { NOMINAL_BANDS } from '../schemas/programmes'; // relative: the e2e tests import this file outside Vite
 
 /**
  * CSV for loudspeaker and amplifier models: one header row of field names, one model per row.
  * Export and import are exact inverses: numbers are written as JavaScript prints them, "not given"
  * as an empty cell, and a text cell a spreadsheet would run as a formula is written with a leading
- * apostrophe (and read back without it).
+ * apostrophe (and read back without it). A column `field.key` is one entry of an object field
+ * (`bandResponseDb.63` is the 63 Hz band response), so a row stays one flat line a spreadsheet can edit.
+ * The directivity table travels in its own file (directivity-csv.ts): it is a table, not a cell.
  */
 export const LOUDSPEAKER_CSV_COLUMNS = [
 	'name', 'maker', 'kind', 'sensitivityDb', 'sensitivityRef', 'impedanceOhm', 'powerContinuousW', 'powerPeakW',
 	'maxSplContinuousDb', 'maxSplPeakDb', 'dispersionHDeg', 'dispersionVDeg', 'lowHz', 'highHz', 'heightM',
+	'compressionDb', ...NOMINAL_BANDS.map((band) => `bandResponseDb.${band}` as const),
 	'weightKg', 'dayRateMinor', 'replacementValueMinor', 'notes'
 ] as const;
 
@@ -24,8 +28,38 @@ const TEXT_COLUMNS = new Set(['name', 'maker', 'kind', 'sensitivityRef', 'notes'
 const NEEDS_ESCAPE = /^[=+\-@\t\r']/;
 const NUMBER = /^-?\d+(\.\d+)?([eE][-+]?\d+)?$/;
 
+/** The value of one column in a row, reaching into an object field for a `field.key` column. */
+export function cellOf(row: object, column: string): unknown {
+	const dot = column.indexOf('.');
+	const record = row as Record<string, unknown>;
+	if (dot < 0) return record[column];
+	const inner = record[column.slice(0, dot)] as Record<string, unknown> | null | undefined;
+	return inner?.[column.slice(dot + 1)];
+}
+
+/** The inverse of cellOf over a whole row: `field.key` cells gather into one object (empty cells left out). */
+function nestRow(flat: Record<string, unknown>): Record<string, unknown> {
+	const row: Record<string, unknown> = {};
+	for (const [column, value] of Object.entries(flat)) {
+		const dot = column.indexOf('.');
+		if (dot < 0) {
+			row[column] = value;
+			continue;
+		}
+		const field = column.slice(0, dot);
+		if (value === null) {
+			row[field] ??= null; // every cell empty: the field is "not given"
+			continue;
+		}
+		const inner = (row[field] ??= {}) as Record<string, unknown> | null;
+		if (inner) inner[column.slice(dot + 1)] = value;
+		else row[field] = { [column.slice(dot + 1)]: value };
+	}
+	return row;
+}
+
 export function serialiseCsv(rows: readonly object[], columns: readonly string[]): string {
-	const data = rows.map((row) => columns.map((c) => exportCell(c, (row as Record<string, unknown>)[c])));
+	const data = rows.map((row) => columns.map((c) => exportCell(c, cellOf(row, c))));
 	return Papa.unparse({ fields: [...columns], data }, { newline: '\r\n' }) + '\r\n';
 }
 
@@ -74,11 +108,12 @@ export function parseModelsCsv<S extends z.ZodType>(
 
 	const seen = new Map<string, number>();
 	const rows = parsed.data.map((record, index): CsvRow<z.output<S>> => {
-		const values = Object.fromEntries(columns.map((c) => [c, cellValue(c, record[c] ?? '')]));
+		const values = nestRow(Object.fromEntries(columns.map((c) => [c, cellValue(c, record[c] ?? '')])));
 		const result = schema.safeParse(values);
 		const errors: Record<string, string[]> = {};
 		if (!result.success) {
-			for (const issue of result.error.issues) (errors[String(issue.path[0] ?? '_')] ??= []).push(issue.message);
+			// Errors name the CSV column: `bandResponseDb.63`, like the header.
+			for (const issue of result.error.issues) (errors[issue.path.slice(0, 2).map(String).join('.') || '_'] ??= []).push(issue.message);
 		}
 		const key = `${String(values.name).trim().toLowerCase()}\u0000${String(values.maker).trim().toLowerCase()}`;
 		if (seen.has(key)) (errors.name ??= []).push(`Same name and maker as row ${seen.get(key)}`);

@@ -1,3 +1,4 @@
+import type { DirectivityTable } from '$lib/schemas/directivity';
 import type { AmplifierInput } from '$lib/schemas/inventory-amplifiers';
 import type { LoudspeakerInput } from '$lib/schemas/inventory-loudspeakers';
 import type { UnitStatus } from '$lib/schemas/inventory-units';
@@ -21,6 +22,10 @@ export interface PackageGroupRow {
 	amplifierModelId: number;
 	cabinetsPerChannel: number;
 	flown: boolean;
+	/** v2 placement; optional so rows made before it (and fixtures) still fit. */
+	heightM?: number | null;
+	spacingM?: number | null;
+	directivity?: DirectivityTable | null;
 }
 
 export interface PackageRow extends Stamped {

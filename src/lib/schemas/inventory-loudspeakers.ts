@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { bandResponseSchema, compressionSchema, optionalDirectivitySchema } from './directivity';
 import { makerField, measure, minorUnits, nameField, notesField, optionalMeasure, patchSchemaOf, weightKg } from './inventory-common';
 
 export const LOUDSPEAKER_KINDS = ['full-range', 'subwoofer', 'line-array-element', 'monitor'] as const;
@@ -23,6 +24,9 @@ export const loudspeakerFields = z.object({
 	// lower (40 Hz–1 kHz), else the model would credit it with mid-band output (see checkLoudspeaker).
 	highHz: measure(40, 40000, 'Hz'),
 	heightM: optionalMeasure(0.05, 2, 'm'),
+	bandResponseDb: bandResponseSchema,
+	compressionDb: compressionSchema,
+	directivity: optionalDirectivitySchema,
 	weightKg,
 	dayRateMinor: minorUnits,
 	replacementValueMinor: minorUnits,
@@ -74,5 +78,8 @@ export const LOUDSPEAKER_ACOUSTIC_FIELDS = [
 	'dispersionVDeg',
 	'lowHz',
 	'highHz',
-	'heightM'
+	'heightM',
+	'bandResponseDb',
+	'compressionDb',
+	'directivity'
 ] as const satisfies readonly (keyof LoudspeakerInput)[];

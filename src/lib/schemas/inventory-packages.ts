@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { patchSchemaOf } from './inventory-common';
+import { optionalDirectivitySchema } from './directivity';
+import { measure, patchSchemaOf } from './inventory-common';
 
 const id = z.number({ error: 'Choose one' }).int().positive('Choose one');
 const wholeCount = (max: number) =>
@@ -12,7 +13,13 @@ export const packageGroupSchema = z.object({
 	stacks: wholeCount(16).default(1),
 	amplifierModelId: id,
 	cabinetsPerChannel: wholeCount(8),
-	flown: z.boolean().default(false)
+	flown: z.boolean().default(false),
+	/** Acoustic centre above ground (v2, used with a site); empty means the model's 1.5 m. */
+	heightM: measure(0, 50, 'm').nullish(),
+	/** Between the outermost stacks or hangs; empty means 0. */
+	spacingM: measure(0, 200, 'm').nullish(),
+	/** The arrangement's own pattern (e.g. cardioid subs), overriding the loudspeaker's table. */
+	directivity: optionalDirectivitySchema
 });
 export type PackageGroupInput = z.output<typeof packageGroupSchema>;
 

@@ -45,11 +45,27 @@ export function translateDbError(err: unknown, duplicate: { field: string; messa
 	throw err;
 }
 
-/** The text a history entry keeps for a value. */
+/** The text a history entry keeps for a value; objects (band response, directivity) as canonical JSON. */
 export function historyText(value: unknown): string | null {
 	if (value === null || value === undefined) return null;
 	if (value instanceof Date) return value.toISOString();
+	if (typeof value === 'object') return canonicalJson(value);
 	return String(value);
+}
+
+/**
+ * JSON with object keys in a fixed order (bands by frequency), so a value read back from the database
+ * compares equal to the same value sent by a form: JavaScript lists "63" before "31.5" but keeps
+ * "31.5" where it was inserted.
+ */
+export function canonicalJson(value: unknown): string {
+	if (value === null || typeof value !== 'object') return JSON.stringify(value) ?? 'null';
+	if (Array.isArray(value)) return `[${value.map(canonicalJson).join(',')}]`;
+	const record = value as Record<string, unknown>;
+	const keys = Object.keys(record)
+		.filter((k) => record[k] !== undefined)
+		.sort((a, b) => Number(a) - Number(b) || a.localeCompare(b));
+	return `{${keys.map((k) => `${JSON.stringify(k)}:${canonicalJson(record[k])}`).join(',')}}`;
 }
 
 /** Whether a loudspeaker or amplifier model with this id exists. */

@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
 import type { z } from 'zod';
-import { AMPLIFIER_CSV_COLUMNS, LOUDSPEAKER_CSV_COLUMNS, csvErrorEnvelope, parseModelsCsv, serialiseCsv } from '$lib/inventory/csv';
+import { AMPLIFIER_CSV_COLUMNS, LOUDSPEAKER_CSV_COLUMNS, cellOf, csvErrorEnvelope, parseModelsCsv, serialiseCsv } from '$lib/inventory/csv';
 import { historyText } from './inventory-common';
 import { amplifierSchema } from '$lib/schemas/inventory-amplifiers';
 import { loudspeakerSchema } from '$lib/schemas/inventory-loudspeakers';
@@ -60,7 +60,7 @@ export async function previewImport(kind: CsvKind, text: string): Promise<Import
 			const data = r.data as Record<string, unknown>;
 			const existing = (await service.findByNameAndMaker(String(data.name), String(data.maker))) as Record<string, unknown> | null;
 			if (!existing) return { ...base, action: 'create', changes: [] };
-			const changes = columns.filter((c) => historyText(existing[c]) !== historyText(data[c]));
+			const changes = columns.filter((c) => historyText(cellOf(existing, c)) !== historyText(cellOf(data, c)));
 			return { ...base, action: changes.length ? 'update' : 'unchanged', changes };
 		})
 	);

@@ -1,5 +1,4 @@
-import { LOUDSPEAKER_CSV_COLUMNS } from '$lib/inventory/csv';
-import { LOUDSPEAKER_ACOUSTIC_FIELDS, loudspeakerSchema } from '$lib/schemas/inventory-loudspeakers';
+import { LOUDSPEAKER_ACOUSTIC_FIELDS, loudspeakerFields, loudspeakerSchema } from '$lib/schemas/inventory-loudspeakers';
 import { LoudspeakerModel } from '../db/models';
 import { specModelService } from './inventory-spec-models';
 
@@ -8,6 +7,7 @@ export const loudspeakers = specModelService({
 	modelType: 'loudspeaker',
 	model: LoudspeakerModel,
 	schema: loudspeakerSchema,
-	fields: LOUDSPEAKER_CSV_COLUMNS,
+	// Every stored field, the band response and directivity table included (history compares them as JSON).
+	fields: Object.keys(loudspeakerFields.shape),
 	acousticFields: LOUDSPEAKER_ACOUSTIC_FIELDS
 });

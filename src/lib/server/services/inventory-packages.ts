@@ -1,11 +1,13 @@
 import type { Transaction } from 'sequelize';
 import { channelPlanErrors } from '$lib/inventory/channel-plan';
+import { directivityText } from '$lib/inventory/gear-text';
 import type { LoadedPackage, PackageRow } from '$lib/inventory/types';
 import { packageSchema, type PackageInput, type PackagePatch } from '$lib/schemas/inventory-packages';
 import { AmplifierModel, LoudspeakerModel, Package, PackageGroup } from '../db/models';
 import { DomainError } from './errors';
 import { plainRow, translateDbError, validOrThrow, withTransaction } from './inventory-common';
 import { deleteHistory, recordChanges, recordCreation } from './inventory-history';
+import { flagQuotesForPackageChange } from './recheck';
 
 const DUPLICATE = { field: 'slug', message: 'Another package already uses this slug' };
 const FIELDS = ['name', 'slug', 'description', 'active', 'groups'] as const;
@@ -88,11 +90,21 @@ async function writeGroups(packageId: number, groups: PackageInput['groups'], tr
 	await PackageGroup.bulkCreate(groups.map((g, position) => ({ ...g, packageId, position })), { transaction });
 }
 
+type GroupValues = Omit<PackageInput['groups'][number], 'heightM' | 'spacingM' | 'directivity'> & Partial<Pick<PackageInput['groups'][number], 'heightM' | 'spacingM' | 'directivity'>>;
+
+/** What the acoustic model reads of a group; the 'flown' flag is rigging, not acoustics. */
+function acousticText(g: GroupValues): string {
+	const placement = [
+		g.heightM != null ? `${g.heightM} m high` : '',
+		g.spacingM != null ? `outer stacks ${g.spacingM} m apart` : '',
+		g.directivity ? `own pattern ${directivityText(g.directivity)}` : ''
+	].filter(Boolean);
+	return [`${g.stacks}×${g.count} of loudspeaker #${g.loudspeakerModelId} on amplifier #${g.amplifierModelId}, ${g.cabinetsPerChannel} per channel`, ...placement].join(', ');
+}
+
 /** A one-line summary of the groups, so the history can show old → new for the whole channel plan. */
-function groupsText(groups: readonly PackageInput['groups'][number][]): string {
-	return groups
-		.map((g) => `${g.stacks}×${g.count} of loudspeaker #${g.loudspeakerModelId} on amplifier #${g.amplifierModelId}, ${g.cabinetsPerChannel} per channel${g.flown ? ', flown' : ''}`)
-		.join('; ');
+function groupsText(groups: readonly GroupValues[]): string {
+	return groups.map((g) => acousticText(g) + (g.flown ? ', flown' : '')).join('; ');
 }
 
 export async function createPackage(input: PackageInput, actorId: number | null, transaction?: Transaction): Promise<PackageRow> {
@@ -123,7 +135,10 @@ export async function updatePackage(id: number, changes: PackagePatch, actorId: 
 		);
 		const { groups, ...fields } = merged;
 		await current.update(fields, { transaction: t }).catch((err) => translateDbError(err, DUPLICATE));
-		if (changed.includes('groups')) await writeGroups(id, groups, t);
+		if (changed.includes('groups')) {
+			await writeGroups(id, groups, t);
+			if (before.groups.map(acousticText).join('; ') !== merged.groups.map(acousticText).join('; ')) await flagQuotesForPackageChange(id, t);
+		}
 		return toRow(await find(id, t));
 	});
 }

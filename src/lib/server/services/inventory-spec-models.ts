@@ -12,7 +12,7 @@ interface SpecModelConfig<S extends z.ZodType> {
 	model: ModelStatic<Model>;
 	/** The complete schema with its cross-field rules. */
 	schema: S;
-	/** Every stored field, in CSV column order. */
+	/** Every stored field (history compares these). */
 	fields: readonly string[];
 	/** Fields the acoustic model reads: a change re-checks open quotes. */
 	acousticFields: readonly string[];

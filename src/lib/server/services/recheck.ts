@@ -34,3 +34,26 @@ export async function flagQuotesForSpecChange(
 	);
 	return count;
 }
+
+/**
+ * Called when a package's groups change in a way the acoustic model reads (cabinets, amplifiers, wiring,
+ * height, spacing, the group's own pattern): flags every open quote whose current version uses the package.
+ */
+export async function flagQuotesForPackageChange(packageId: number, transaction?: Transaction): Promise<number> {
+	catalogueChanged();
+	const rows = await Quote.sequelize!.query<{ id: number }>(
+		`SELECT DISTINCT q.id FROM quotes q
+		   JOIN quote_versions v ON v.quoteId = q.id AND v.version = q.currentVersion
+		  WHERE q.status IN (:open) AND v.packageId = :packageId`,
+		{ type: QueryTypes.SELECT, replacements: { open: OPEN_STATUSES, packageId }, transaction }
+	);
+	if (rows.length === 0) return 0;
+	const [count] = await Quote.update(
+		{
+			needsRecheck: true,
+			recheckReason: `The package used by this quote changed on ${new Date().toISOString().slice(0, 10)}.`
+		},
+		{ where: { id: rows.map((r) => r.id) }, transaction }
+	);
+	return count;
+}

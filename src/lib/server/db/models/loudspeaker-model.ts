@@ -6,6 +6,7 @@ import {
 	type InferCreationAttributes,
 	type Sequelize
 } from 'sequelize';
+import type { BandResponse, DirectivityTable } from '../../../schemas/directivity';
 import { LOUDSPEAKER_KINDS, SENSITIVITY_REFS } from '../../../schemas/inventory-loudspeakers';
 
 type Kind = (typeof LOUDSPEAKER_KINDS)[number];
@@ -28,6 +29,11 @@ export class LoudspeakerModel extends Model<InferAttributes<LoudspeakerModel>, I
 	declare lowHz: number;
 	declare highHz: number;
 	declare heightM: number | null;
+	/** v2: dB re the sensitivity per octave band (JSON); null = flat. */
+	declare bandResponseDb: CreationOptional<BandResponse | null>;
+	declare compressionDb: CreationOptional<number | null>;
+	/** v2: horizontal directivity table (JSON, bands × angles); null = the model's cautious default. */
+	declare directivity: CreationOptional<DirectivityTable | null>;
 	declare weightKg: number;
 	declare dayRateMinor: number;
 	declare replacementValueMinor: number;
@@ -58,6 +64,9 @@ export class LoudspeakerModel extends Model<InferAttributes<LoudspeakerModel>, I
 				lowHz: measure(),
 				highHz: measure(),
 				heightM: optional(),
+				bandResponseDb: { type: DataTypes.JSON, allowNull: true },
+				compressionDb: optional(),
+				directivity: { type: DataTypes.JSON, allowNull: true },
 				weightKg: measure(),
 				dayRateMinor: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
 				replacementValueMinor: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },

@@ -8,6 +8,7 @@ import {
 	type NonAttribute,
 	type Sequelize
 } from 'sequelize';
+import type { DirectivityTable } from '../../../schemas/directivity';
 import type { AmplifierModel } from './amplifier-model';
 import type { LoudspeakerModel } from './loudspeaker-model';
 import type { Package } from './package';
@@ -23,6 +24,12 @@ export class PackageGroup extends Model<InferAttributes<PackageGroup>, InferCrea
 	declare amplifierModelId: ForeignKey<AmplifierModel['id']>;
 	declare cabinetsPerChannel: number;
 	declare flown: CreationOptional<boolean>;
+	/** v2: acoustic centre above ground, m; null = the model's default. */
+	declare heightM: CreationOptional<number | null>;
+	/** v2: between the outermost stacks or hangs, m; null = 0. */
+	declare spacingM: CreationOptional<number | null>;
+	/** v2: the arrangement's own pattern (JSON), overriding the loudspeaker's. */
+	declare directivity: CreationOptional<DirectivityTable | null>;
 	declare loudspeaker?: NonAttribute<LoudspeakerModel>;
 	declare amplifier?: NonAttribute<AmplifierModel>;
 
@@ -37,7 +44,10 @@ export class PackageGroup extends Model<InferAttributes<PackageGroup>, InferCrea
 				stacks: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
 				amplifierModelId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
 				cabinetsPerChannel: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-				flown: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false }
+				flown: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+				heightM: { type: DataTypes.DOUBLE, allowNull: true },
+				spacingM: { type: DataTypes.DOUBLE, allowNull: true },
+				directivity: { type: DataTypes.JSON, allowNull: true }
 			},
 			{ sequelize, tableName: 'package_groups', timestamps: false }
 		);

@@ -1,0 +1,16 @@
+import { describe, expect, it } from 'vitest';
+import { bandResponseText, directivityText, historyValueText } from './gear-text';
+
+describe('gear data in words', () => {
+	it('lists bands in frequency order, 31.5 Hz first, with true minus signs', () => {
+		expect(bandResponseText({ '63': -3, '31.5': -18, '1000': 0 })).toBe('31.5 Hz −18, 63 Hz −3, 1 kHz 0');
+		expect(directivityText({ anglesDeg: [0, 90, 180], bandsDb: { '2000': [0, 9, 20], '31.5': [0, 0.5, 1] } })).toBe('at 0 90 180°; 31.5 Hz: 0 0.5 1; 2 kHz: 0 9 20');
+	});
+
+	it('turns stored JSON of the two table fields into words and leaves other values alone', () => {
+		expect(historyValueText('directivity', '{"anglesDeg":[0,180],"bandsDb":{"63":[0,3]}}')).toBe('at 0 180°; 63 Hz: 0 3');
+		expect(historyValueText('bandResponseDb', '{"63":-4}')).toBe('63 Hz −4');
+		expect(historyValueText('sensitivityDb', '96')).toBe('96');
+		expect(historyValueText('directivity', null)).toBeNull();
+	});
+});
