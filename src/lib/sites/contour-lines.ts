@@ -4,7 +4,7 @@
  * map's border). NaN cells (no band has a level) count as below every threshold, so they are left out.
  */
 import { contours } from 'd3-contour';
-import type { Grid } from '$lib/acoustics';
+import type { Grid } from '../acoustics';
 
 export const CONTOUR_STEP_DB = 5;
 /** Enough for 120 dB of range; the quietest lines are kept when there are more (limits are quiet). */

@@ -3,7 +3,7 @@
  * (contract: `levelGrid`, shared/acoustics.md step 10), never more than the model's 250 000 points.
  * Grid points sit on the extent's corners and edges, so the map covers exactly what the plan shows.
  */
-import type { Grid, Weighting } from '$lib/acoustics';
+import type { Grid, Weighting } from '../acoustics';
 import type { PlanExtent } from './extent';
 
 /** The model refuses larger grids (shared/acoustics.md, errors). */

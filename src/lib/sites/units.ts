@@ -2,7 +2,7 @@
  * Lengths on the plan: the site is kept in metres, shown in metres or feet. The conversion is the
  * model's own (1 ft = 0.3048 m exactly), used only here at the edge.
  */
-import { feetToMetres, metresToFeet } from '$lib/acoustics';
+import { feetToMetres, metresToFeet } from '../acoustics';
 
 export type PlanUnits = 'm' | 'ft';
 
