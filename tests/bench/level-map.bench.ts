@@ -8,11 +8,10 @@
  * The package, request and site are invented bench inputs.
  */
 import { pathToFileURL } from 'node:url';
-import { sumLevels, type PackageSpec, type QuoteRequest, type Site } from '../../src/lib/acoustics/index';
+import { levelGrid, sumLevels, type PackageSpec, type QuoteRequest, type Site } from '../../src/lib/acoustics/index';
 import { contourLines, contourThresholds } from '../../src/lib/sites/contour-lines';
 import { planExtent } from '../../src/lib/sites/extent';
 import { computeLevelMap } from '../../src/lib/sites/level-map';
-import { computeLevelGrid } from '../../src/lib/sites/level-source';
 import { gridSpec } from '../../src/lib/sites/map-grid';
 
 export interface LevelMapBench {
@@ -71,7 +70,7 @@ export function runLevelMapBench(minMs = 1000): LevelMapBench[] {
 		for (let i = 0; i < n; i++) sink += computeLevelMap({ packageSpec: pkg, request, site, extent, weighting: 'A' }).lines.length;
 	};
 	const grid = gridSpec(extent, 'A');
-	const { nx, ny, levels } = computeLevelGrid(pkg, { ...request, site: { ...site, receivers: [] } }, grid);
+	const { nx, ny, levels } = levelGrid(pkg, { ...request, site: { ...site, receivers: [] } }, grid);
 	const thresholds = contourThresholds(levels);
 	const contoursOnly = (n: number) => {
 		for (let i = 0; i < n; i++) sink += contourLines(levels, nx, ny, thresholds).length;

@@ -3,10 +3,9 @@
  * 5 dB plus one line at each receiver limit in the map's weighting, in plan metres. Pure; the
  * component throttles calls to one per animation frame.
  */
-import type { PackageSpec, QuoteRequest, Site, Weighting } from '../acoustics';
+import { levelGrid, type PackageSpec, type QuoteRequest, type Site, type Weighting } from '../acoustics';
 import { contourLines, contourThresholds, gridVertexToWorld, withExtraLevels, type Vertex } from './contour-lines';
 import type { PlanExtent } from './extent';
-import { computeLevelGrid } from './level-source';
 import { gridSpec } from './map-grid';
 
 export type MapWeighting = Extract<Weighting, 'A' | 'C'>;
@@ -48,7 +47,7 @@ export function computeLevelMap(input: LevelMapInput): LevelMap {
 	const grid = gridSpec(input.extent, input.weighting, { pointsPerSide: input.pointsPerSide });
 	// Receivers do not change the grid; leaving them out keeps the model's work to the map itself.
 	const site: Site = { ...input.site, receivers: [] };
-	const { nx, ny, levels } = computeLevelGrid(input.packageSpec, { ...input.request, site }, grid);
+	const { nx, ny, levels } = levelGrid(input.packageSpec, { ...input.request, site }, grid);
 	const ladder = contourThresholds(levels);
 	const limits = limitLevels(input.site, input.weighting);
 	const limitSet = new Set(limits);

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { gridPointCount, gridSize, gridSpec, MAX_GRID_POINTS } from './map-grid';
+import { MAX_GRID_POINTS } from '../acoustics';
+import { gridPointCount, gridSize, gridSpec } from './map-grid';
 
 describe('grid for the level map', () => {
 	it('puts 100 points on the longer side and covers the extent', () => {

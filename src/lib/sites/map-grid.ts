@@ -1,13 +1,12 @@
 /**
  * The grid the level map asks the model for: about 100 × 100 points over the plan's visible extent
  * (contract: `levelGrid`, shared/acoustics.md step 10), never more than the model's 250 000 points.
- * Grid points sit on the extent's corners and edges, so the map covers exactly what the plan shows.
+ * Grid points start at the extent's corner and reach (or just pass) its far edges, so the map covers
+ * all the plan shows; the model refuses grids over MAX_GRID_POINTS.
  */
-import type { Grid, Weighting } from '../acoustics';
+import { MAX_GRID_POINTS, type Grid, type Weighting } from '../acoustics';
 import type { PlanExtent } from './extent';
 
-/** The model refuses larger grids (shared/acoustics.md, errors). */
-export const MAX_GRID_POINTS = 250_000;
 /** Points along the longer side: 100 × 100 redraws well over 10 times a second in a browser. */
 export const DEFAULT_POINTS_PER_SIDE = 100;
 
@@ -19,7 +18,7 @@ export function gridSpec(
 	const width = extent.xMaxM - extent.xMinM;
 	const height = extent.yMaxM - extent.yMinM;
 	if (!(width > 0 && height > 0)) throw new RangeError('The plan extent must have a positive size');
-	const perSide = Math.max(2, Math.min(Math.floor(options.pointsPerSide ?? DEFAULT_POINTS_PER_SIDE), 500));
+	const perSide = Math.max(2, Math.min(Math.floor(options.pointsPerSide ?? DEFAULT_POINTS_PER_SIDE), Math.floor(Math.sqrt(MAX_GRID_POINTS))));
 	// perSide points span perSide − 1 steps on the longer side.
 	const stepM = Math.max(width, height) / (perSide - 1);
 	// Enough steps to reach (or just pass) each far edge, so the map covers all the plan shows;
