@@ -6,6 +6,7 @@
  */
 import { fileURLToPath } from 'node:url';
 import { runAcousticsBench } from './acoustics.bench';
+import { runLevelMapBench } from './level-map.bench';
 import { httpRows, LOAD, measureHttp } from './http-suite';
 import type { LoadResult } from './http-load';
 import { pageWeight, type PageWeight } from './page-weight';
@@ -54,6 +55,8 @@ async function main(): Promise<void> {
 	const notes: string[] = [];
 	log('acoustic model (in this process, before the world starts)');
 	const acoustics = runAcousticsBench();
+	log('level map (levelGrid + contours, 100 × 100, in this process)');
+	const levelMaps = runLevelMapBench();
 
 	log('setting up the bench world from nothing (MariaDB, migrate, seed, fakes, build, boot)…');
 	let world: World;
@@ -101,6 +104,15 @@ async function main(): Promise<void> {
 			target: `≥ ${ACOUSTICS_TARGET.toLocaleString('en-GB')}/s`,
 			ok: acoustics.opsPerSec >= ACOUSTICS_TARGET
 		},
+		...levelMaps.map((m) => ({
+			metric: m.name,
+			value: m.opsPerSec,
+			unit: '/s',
+			baseline: m.baselineOpsPerSec,
+			ratio: m.ratio,
+			target: '≥ 10/s',
+			ok: m.opsPerSec >= 10
+		})),
 		...httpRows(load, notes),
 		...pages.map((p) => ({
 			metric: `JS for ${p.path}${p.finalPath !== p.path ? ` (→ ${p.finalPath})` : ''} as ${p.role.split('@')[0]}, ${p.modules} modules`,

@@ -21,8 +21,8 @@ afterAll(async () => {
 	await browser?.close();
 });
 
-async function openPreview(viewport: { width: number; height: number }): Promise<Page> {
-	const context = await browser.newContext({ viewport, locale: 'en-GB' });
+async function openPreview(viewport: { width: number; height: number }, touch = false): Promise<Page> {
+	const context = await browser.newContext({ viewport, locale: 'en-GB', hasTouch: touch, isMobile: touch });
 	const page = await context.newPage();
 	await signIn(page, SALES);
 	await page.waitForURL(`${BASE_URL}/`);
@@ -114,7 +114,7 @@ describe.each([
 		expect(paths2).not.toBe(paths1);
 
 		// The map's weighting toggles between dB(A) and dB(C).
-		await page.getByText('dB(C)', { exact: true }).click();
+		await page.locator('label', { hasText: 'dB(C)' }).click();
 		await page.locator('[data-testid="level-map"][data-weighting="C"] path[data-level]').first().waitFor({ state: 'attached' });
 		expect(await contourPaths(page)).not.toBe(paths2);
 
@@ -122,6 +122,28 @@ describe.each([
 		console.log(`site plan @${viewport.width}: last level map (grid + contours) took ${ms} ms in the browser`);
 		await screenshot(page, `site-plan-${name}`);
 		await axeClean(page, `${PATH} @${viewport.width}`);
+		await page.context().close();
+	});
+});
+
+describe('site plan preview on a touch screen', () => {
+	it('moves a receiver with a finger', async () => {
+		const page = await openPreview(PHONE, true);
+		const row = page.locator('[data-testid="receiver-row"]').nth(2);
+		const before = await rowNumbers(row);
+		const box = (await page.locator('[data-testid="plan-receiver"]').nth(2).locator('path').boundingBox())!;
+		const x = box.x + box.width / 2;
+		const y = box.y + box.height / 2;
+		// Playwright has no touch drag; Chromium's DevTools protocol sends real touch events.
+		const cdp = await page.context().newCDPSession(page);
+		const touch = (type: string, points: { x: number; y: number }[]) =>
+			cdp.send('Input.dispatchTouchEvent', { type, touchPoints: points });
+		await touch('touchStart', [{ x, y }]);
+		for (let i = 1; i <= 6; i++) await touch('touchMove', [{ x: x - 5 * i, y: y + 5 * i }]);
+		await touch('touchEnd', []);
+		const after = await rowNumbers(row);
+		expect(Number(after.x)).toBeLessThan(Number(before.x));
+		expect(Number(after.y)).toBeLessThan(Number(before.y));
 		await page.context().close();
 	});
 });

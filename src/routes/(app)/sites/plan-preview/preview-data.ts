@@ -51,7 +51,7 @@ export const previewPackage: PackageSpec = {
 };
 
 export const previewRequest: Omit<QuoteRequest, 'site'> = {
-	targetDb: 96,
+	targetDb: 92,
 	weighting: 'A',
 	distanceM: 35,
 	audienceWidthM: 40,
