@@ -21,23 +21,39 @@ afterAll(async () => {
 	await browser?.close();
 });
 
-async function openPreview(viewport: { width: number; height: number }, touch = false): Promise<Page> {
-	const context = await browser.newContext({ viewport, locale: 'en-GB', hasTouch: touch, isMobile: touch });
+async function openPreview(
+	viewport: { width: number; height: number },
+	touch = false
+): Promise<Page> {
+	const context = await browser.newContext({
+		viewport,
+		locale: 'en-GB',
+		hasTouch: touch,
+		isMobile: touch
+	});
 	const page = await context.newPage();
 	await signIn(page, SALES);
 	await page.waitForURL(`${BASE_URL}/`);
 	await page.goto(`${BASE_URL}${PATH}`);
-	await page.locator('[data-testid="level-map"] path[data-level]').first().waitFor({ state: 'attached' });
+	await page
+		.locator('[data-testid="level-map"] path[data-level]')
+		.first()
+		.waitFor({ state: 'attached' });
 	return page;
 }
 
 async function contourPaths(page: Page): Promise<string> {
-	return (await page.locator('[data-testid="level-map"] path').evaluateAll((ps) => ps.map((p) => p.getAttribute('d')))).join('|');
+	return (
+		await page
+			.locator('[data-testid="level-map"] path')
+			.evaluateAll((ps) => ps.map((p) => p.getAttribute('d')))
+	).join('|');
 }
 
 async function rowNumbers(row: Locator): Promise<Record<string, string>> {
 	const out: Record<string, string> = {};
-	for (const field of ['x', 'y', 'distance', 'bearing']) out[field] = await row.locator(`input[data-field="${field}"]`).inputValue();
+	for (const field of ['x', 'y', 'distance', 'bearing'])
+		out[field] = await row.locator(`input[data-field="${field}"]`).inputValue();
 	return out;
 }
 
@@ -62,7 +78,11 @@ async function dragBy(page: Page, target: Locator, dx: number, dy: number): Prom
 
 async function axeClean(page: Page, label: string): Promise<void> {
 	const findings = await runAxe(page);
-	expect(findings.map((f) => `${label}: ${f.id} (${f.impact}) ${f.nodes.map((n) => n.target).join(', ')}`)).toEqual([]);
+	expect(
+		findings.map(
+			(f) => `${label}: ${f.id} (${f.impact}) ${f.nodes.map((n) => n.target).join(', ')}`
+		)
+	).toEqual([]);
 }
 
 describe.each([
@@ -115,11 +135,16 @@ describe.each([
 
 		// The map's weighting toggles between dB(A) and dB(C).
 		await page.locator('label', { hasText: 'dB(C)' }).click();
-		await page.locator('[data-testid="level-map"][data-weighting="C"] path[data-level]').first().waitFor({ state: 'attached' });
+		await page
+			.locator('[data-testid="level-map"][data-weighting="C"] path[data-level]')
+			.first()
+			.waitFor({ state: 'attached' });
 		expect(await contourPaths(page)).not.toBe(paths2);
 
 		const ms = await page.locator('svg[data-map-ms]').getAttribute('data-map-ms');
-		console.log(`site plan @${viewport.width}: last level map (grid + contours) took ${ms} ms in the browser`);
+		console.log(
+			`site plan @${viewport.width}: last level map (grid + contours) took ${ms} ms in the browser`
+		);
 		await screenshot(page, `site-plan-${name}`);
 		await axeClean(page, `${PATH} @${viewport.width}`);
 		await page.context().close();
@@ -131,13 +156,19 @@ describe('site plan preview on a touch screen', () => {
 		const page = await openPreview(PHONE, true);
 		const row = page.locator('[data-testid="receiver-row"]').nth(2);
 		const before = await rowNumbers(row);
-		const box = (await page.locator('[data-testid="plan-receiver"]').nth(2).locator('path').boundingBox())!;
+		const box = (await page
+			.locator('[data-testid="plan-receiver"]')
+			.nth(2)
+			.locator('path')
+			.boundingBox())!;
 		const x = box.x + box.width / 2;
 		const y = box.y + box.height / 2;
 		// Playwright has no touch drag; Chromium's DevTools protocol sends real touch events.
 		const cdp = await page.context().newCDPSession(page);
-		const touch = (type: string, points: { x: number; y: number }[]) =>
-			cdp.send('Input.dispatchTouchEvent', { type, touchPoints: points });
+		const touch = (
+			type: 'touchStart' | 'touchMove' | 'touchEnd',
+			points: { x: number; y: number }[]
+		) => cdp.send('Input.dispatchTouchEvent', { type, touchPoints: points });
 		await touch('touchStart', [{ x, y }]);
 		for (let i = 1; i <= 6; i++) await touch('touchMove', [{ x: x - 5 * i, y: y + 5 * i }]);
 		await touch('touchEnd', []);
