@@ -5,6 +5,8 @@
 import { randomInt } from 'node:crypto';
 import { Booking, BookingLine, Quote, StockUnit } from '../../src/lib/server/db/models';
 import { BOOKINGS, CATALOGUE, invalidate } from '../../src/lib/server/cache';
+import { createQuote } from '../../src/lib/server/services/quotes';
+import type { SessionUser } from '../../src/lib/server/users';
 import { makeClientUser, makeStaffUser, makeStockedPackage } from './inventory';
 
 export const today = () => new Date().toISOString().slice(0, 10);
@@ -20,6 +22,14 @@ export function farDates(length = 2): { startDate: string; endDate: string } {
 	return { startDate: iso(start), endDate: iso(new Date(start.getTime() + (length - 1) * 86_400_000)) };
 }
 
+/** A quote made by the quoting service (so it has its version, as every quote must), then marked confirmed. */
+async function confirmedQuote(clientId: number, eventName: string, packageId: number, dates: { startDate: string; endDate: string }, actor: SessionUser) {
+	const request = { targetDb: 90, weighting: 'A' as const, distance: 10, distanceUnit: 'm' as const, programme: 'speech', temperatureC: 20, humidityPct: 50, ...dates };
+	const made = await createQuote({ clientId, eventName, packageId, request }, actor);
+	await Quote.update({ status: 'confirmed' }, { where: { id: made.id } });
+	return (await Quote.findByPk(made.id))!;
+}
+
 export async function makeBooking(options: { cabinets?: number; units?: number; amplifiers?: number; amplifierUnits?: number; startDate?: string; endDate?: string; tested?: string | null } = {}) {
 	const cabinets = options.cabinets ?? 2;
 	const amplifiers = options.amplifiers ?? 1;
@@ -30,7 +40,7 @@ export async function makeBooking(options: { cabinets?: number; units?: number; 
 	const warehouse = await makeStaffUser('admin');
 	const { client, user: clientUser } = await makeClientUser();
 	const dates = options.startDate && options.endDate ? { startDate: options.startDate, endDate: options.endDate } : farDates();
-	const quote = await Quote.create({ clientId: client.id, eventName: `Out and back ${stock.tag}`, createdById: warehouse.id, status: 'confirmed' } as never);
+	const quote = await confirmedQuote(client.id, `Out and back ${stock.tag}`, stock.pkg.id, dates, warehouse);
 	const booking = await Booking.create({ quoteId: quote.id, status: 'confirmed', ...dates });
 	await BookingLine.bulkCreate([
 		{ bookingId: booking.id, modelType: 'loudspeaker', modelId: stock.loudspeaker.id, quantity: cabinets },
@@ -45,7 +55,7 @@ export async function makeBooking(options: { cabinets?: number; units?: number; 
 
 /** Another confirmed booking for the same models (bypassing the reservation check, as a race needs). */
 export async function anotherBooking(of: Awaited<ReturnType<typeof makeBooking>>, dates = of.dates, cabinets = 1) {
-	const quote = await Quote.create({ clientId: of.client.id, eventName: `Second hire ${of.stock.tag}`, createdById: of.warehouse.id, status: 'confirmed' } as never);
+	const quote = await confirmedQuote(of.client.id, `Second hire ${of.stock.tag}`, of.stock.pkg.id, dates, of.warehouse);
 	const booking = await Booking.create({ quoteId: quote.id, status: 'confirmed', ...dates });
 	await BookingLine.create({ bookingId: booking.id, modelType: 'loudspeaker', modelId: of.stock.loudspeaker.id, quantity: cabinets });
 	return { booking, quote };
