@@ -1,6 +1,6 @@
 /** Schemas for the warehouse's out-and-back work: scans, damage reports, repairs, test intervals, availability queries. */
 import { z } from 'zod';
-import { BOOKING_STATES } from '$lib/bookings/states';
+import { BOOKING_STATES } from '../bookings/states';
 
 /** A serial as printed on a unit label (same shape as stock units' serials). */
 export const serialField = z
