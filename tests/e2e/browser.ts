@@ -7,7 +7,7 @@ export const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? 'throwline-demo';
 
 /** Debian's chromium, with the flags that work as root on a machine without outside network.
  * Playwright gives every launch a fresh temporary profile. */
-export async function launchBrowser(): Promise<Browser> {
+export async function launchBrowser(extraArgs: string[] = []): Promise<Browser> {
 	return chromium.launch({
 		executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
 		args: [
@@ -17,7 +17,8 @@ export async function launchBrowser(): Promise<Browser> {
 			'--no-first-run',
 			'--disable-background-networking',
 			'--disable-component-update',
-			'--disable-sync'
+			'--disable-sync',
+			...extraArgs
 		]
 	});
 }

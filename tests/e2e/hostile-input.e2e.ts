@@ -28,6 +28,7 @@ import {
 } from '../../src/lib/schemas/inventory-loudspeakers';
 import { packagePatchSchema, packageSchema } from '../../src/lib/schemas/inventory-packages';
 import { stockUnitPatchSchema, stockUnitSchema } from '../../src/lib/schemas/inventory-units';
+import { repairSchema, scanSchema } from '../../src/lib/schemas/bookings';
 import { evaluationRequestSchema } from '../../src/lib/schemas/evaluation';
 import {
 	quoteActionSchema,
@@ -83,6 +84,9 @@ const TARGETS: Record<string, Target> = {
 	'POST /api/quotes': { as: 'sales', body: 'json', schema: quoteCreateSchema },
 	'PATCH /api/quotes/[id=id]': { as: 'sales', body: 'json', schema: quoteReviseSchema },
 	'POST /api/quotes/[id=id]/actions': { as: 'sales', body: 'json', schema: quoteActionSchema },
+	'POST /api/bookings/[id=id]/dispatch': { as: 'warehouse', body: 'json', schema: scanSchema },
+	'POST /api/bookings/[id=id]/return': { as: 'warehouse', body: 'json', schema: scanSchema },
+	'POST /api/units/[id=id]/repairs': { as: 'warehouse', body: 'json', schema: repairSchema },
 	'POST /api/quotes/[id=id]/balance-invoice': { as: 'sales', body: 'ignored', status: 404 }, // no such quote
 	'POST /api/webhooks/stripe': { as: 'out', body: 'ignored', status: 400 }, // no signature, whatever the body
 	'POST /api/loudspeakers/import': {

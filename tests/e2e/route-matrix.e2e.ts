@@ -103,6 +103,15 @@ const TABLE: Record<string, Row> = {
 	'POST /api/quotes/[id=id]/actions':          { out: S, admin: 409, warehouse: D, sales: 409, client: 409, stranger: 'missing', quote: 'cancelled', json: { action: 'accept' } },
 	'POST /api/quotes/[id=id]/balance-invoice':  { out: S, admin: 409, warehouse: D, sales: 409, client: D, stranger: D }, // the sent quote is not confirmed
 
+	'GET /api/bookings':                         { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' }, // a client lists only their own
+	'GET /api/bookings/[id=id]':                 { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'missing' }, // the client sees the state only
+	'POST /api/bookings/[id=id]/dispatch':       { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	'POST /api/bookings/[id=id]/return':         { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	'GET /api/units/[id=id]/repairs':            { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'POST /api/units/[id=id]/repairs':           { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	'GET /api/availability':                     { out: S, admin: 422, warehouse: 422, sales: 422, client: D, stranger: D }, // from and to are required
+	'GET /api/damage-reports/[id=id]/photo':     { out: S, admin: 'allowed', warehouse: 'allowed', sales: 'allowed', client: D, stranger: D }, // 404 unless that report has a photo
+
 	// ---- Pages: signed out goes to sign-in ------------------------------------------------------------
 	'layout /':                                  { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },
 	'load /':                                    { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },
@@ -127,6 +136,22 @@ const TABLE: Record<string, Row> = {
 	'load /bookings/[id=id]':                    { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
 	// An empty choice would be valid (it clears the assignment), so the form carries a unit id that cannot be read.
 	'action /bookings/[id=id]?/assign':          { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D, form: { unit: 'not-a-unit' } },
+	'action /bookings/[id=id]?/dispatch':        { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	'action /bookings/[id=id]?/return':          { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	'action /bookings/[id=id]?/damage':          { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	// The suite's booking is confirmed: closing it is refused (409) past the guard.
+	'action /bookings/[id=id]?/close':           { out: S, admin: 409, warehouse: 409, sales: D, client: D, stranger: D },
+	// An empty address would be valid, so the form carries one too long to accept.
+	'action /bookings/[id=id]?/address':         { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D, form: { siteAddress: 'x'.repeat(301) } },
+	'load /bookings/[id=id]/delivery-note':      { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'load /bookings/availability':               { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'load /bookings/tests':                      { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'action /bookings/tests?/tested':            { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	'action /bookings/tests?/interval':          { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	'load /bookings/repairs':                    { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'action /bookings/repairs?/repair':          { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	'load /bookings/labels':                     { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'load /bookings/labels/print':               { out: S, admin: 400, warehouse: 400, sales: 400, client: D, stranger: D }, // names neither a model nor a booking
 
 	// A preview of the site plan (sites:read); the sites pages may replace it.
 	'load /sites/plan-preview':                  { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
@@ -205,6 +230,7 @@ function idFor(collection: string, row: Row): number {
 		units: ids.unitId,
 		attachments: ids.attachmentId,
 		bookings: ids.bookingId,
+		'damage-reports': ids.unitId,
 		users: ids.userId,
 		quotes: row.quote === 'cancelled' ? ids.cancelledQuoteId : ids.sentQuoteId
 	};

@@ -37,7 +37,8 @@ export const settingsSchema = z.object({
 	defaultMarginDb: z.number().min(0, '0 dB or more').max(20, 'At most 20 dB'),
 	distanceUnit: z.enum(['m', 'ft']),
 	paymentTermsDays: z.number().int().min(0).max(120),
-	cancellationFullRefundDays: z.number().int().min(0).max(365)
+	cancellationFullRefundDays: z.number().int().min(0).max(365),
+	testIntervalDays: z.number().int('Whole days').min(1, 'At least 1 day').max(1825, 'At most 5 years (1825 days)').default(365)
 });
 export type SettingsInput = z.infer<typeof settingsSchema>;
 

@@ -39,3 +39,10 @@ export async function parseJsonBody<S extends z.ZodType>(request: Request, schem
 	}
 	return result.data;
 }
+
+/** Validates a URL's search parameters with a shared schema; invalid values → 422 with field errors. */
+export function parseQuery<S extends z.ZodType>(url: URL, schema: S): z.output<S> {
+	const result = schema.safeParse(Object.fromEntries(url.searchParams.entries()));
+	if (!result.success) error(422, { message: 'Some parameters need attention.', errors: fieldErrors(result.error.issues) });
+	return result.data;
+}

@@ -59,7 +59,7 @@ async function createQuote(sessions: Sessions, clientId: number, label: string):
 	return created.json.id as number;
 }
 
-async function act(cookie: string | undefined, id: number, action: string): Promise<void> {
+export async function act(cookie: string | undefined, id: number, action: string): Promise<void> {
 	must(
 		await api(`/api/quotes/${id}/actions`, { cookie, method: 'POST', body: { action } }),
 		200,
@@ -68,7 +68,7 @@ async function act(cookie: string | undefined, id: number, action: string): Prom
 }
 
 /** Pays the deposit on the stand-in's hosted page, then waits for the signed webhook to confirm. */
-async function payDeposit(sessions: Sessions, id: number): Promise<void> {
+export async function payDeposit(sessions: Sessions, id: number): Promise<void> {
 	const quote = await api(`/api/quotes/${id}`, { cookie: sessions.client });
 	const hostedUrl = (quote.json.invoices as { kind: string; hostedUrl: string | null }[]).find(
 		(i) => i.kind === 'deposit'

@@ -3,6 +3,7 @@
  * the ready units per model, and the confirmed bookings overlapping some dates.
  */
 import { Op, QueryTypes, type Transaction } from 'sequelize';
+import { HOLDING_STATES, type BookingState } from '$lib/bookings/states';
 import type { LoadedPackage } from '$lib/inventory/types';
 import type { ModelKey, Reservation } from '$lib/quotes/availability';
 import { Booking, BookingLine, StockUnit } from '../db/models';
@@ -24,19 +25,28 @@ export async function loadedPackages(where: { ids?: number[]; activeOnly?: boole
 	return all.filter((p) => (!where.activeOnly || p.active) && (!where.ids || where.ids.includes(p.id)));
 }
 
-/** Ready units per model. Units in repair or retired are not offered for hire. */
-export async function unitsInService(transaction?: Transaction): Promise<Partial<Record<ModelKey, number>>> {
+/**
+ * Units that can be hired, per model: ready, and not still out on a booking that ended before today
+ * (a unit out late may not be back in time, so it is not offered). Units in repair or retired are
+ * not offered either.
+ */
+export async function unitsInService(transaction?: Transaction, today = new Date().toISOString().slice(0, 10)): Promise<Partial<Record<ModelKey, number>>> {
 	const rows = await StockUnit.sequelize!.query<{ modelType: string; modelId: number; units: number }>(
 		`SELECT modelType, COALESCE(loudspeakerModelId, amplifierModelId) AS modelId, COUNT(*) AS units
-		   FROM stock_units WHERE status = 'ready' GROUP BY modelType, modelId`,
-		{ type: QueryTypes.SELECT, transaction }
+		   FROM stock_units s
+		  WHERE s.status = 'ready'
+		    AND NOT EXISTS (SELECT 1 FROM booking_units bu JOIN bookings b ON b.id = bu.bookingId
+		                     WHERE bu.stockUnitId = s.id AND bu.dispatchedAt IS NOT NULL AND bu.returnedAt IS NULL
+		                       AND b.endDate < :today)
+		  GROUP BY modelType, modelId`,
+		{ type: QueryTypes.SELECT, transaction, replacements: { today } }
 	);
 	const counts: Partial<Record<ModelKey, number>> = {};
 	for (const r of rows) counts[`${r.modelType}:${r.modelId}` as ModelKey] = Number(r.units);
 	return counts;
 }
 
-/** Confirmed bookings sharing at least one day with the dates (optionally leaving one quote out). */
+/** Bookings holding stock (confirmed or out) sharing at least one day with the dates (optionally leaving one quote out). */
 export async function reservationsOverlapping(
 	startDate: string,
 	endDate: string,
@@ -44,7 +54,7 @@ export async function reservationsOverlapping(
 ): Promise<Reservation[]> {
 	const bookings = await Booking.findAll({
 		where: {
-			status: 'confirmed',
+			status: HOLDING_STATES as BookingState[],
 			startDate: { [Op.lte]: endDate },
 			endDate: { [Op.gte]: startDate },
 			...(options.excludeQuoteId ? { quoteId: { [Op.ne]: options.excludeQuoteId } } : {})

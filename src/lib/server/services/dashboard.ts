@@ -3,7 +3,9 @@ import { Op } from 'sequelize';
 import { quoteReference } from '$lib/quotes/reference';
 import { Quote, StockUnit } from '../db';
 import type { SessionUser } from '../users';
+import { lateUnits, type LateUnit } from './booking-life';
 import { listBookings, type BookingSummary } from './pick-lists';
+import { unitsDueForTest } from './safety-tests';
 import { listQuotes, type QuoteSummary } from './quotes';
 
 export interface Overview {
@@ -11,6 +13,10 @@ export interface Overview {
 	quotes: QuoteSummary[];
 	goingOut: BookingSummary[];
 	unitsInRepair: number | null;
+	/** Units not back after their hire ended (staff only). */
+	late: LateUnit[];
+	/** Units overdue for their electrical safety test, and due within two weeks (staff only). */
+	tests: { overdue: number; dueSoon: number } | null;
 }
 
 export async function overviewFor(user: SessionUser): Promise<Overview> {
@@ -18,6 +24,7 @@ export async function overviewFor(user: SessionUser): Promise<Overview> {
 	const inAWeek = new Date(Date.now() + 7 * 86_400_000).toISOString().slice(0, 10);
 	const seesQuotes = user.role !== 'warehouse';
 	const seesStock = user.role !== 'client';
+	const [late, due] = seesStock ? await Promise.all([lateUnits(today), unitsDueForTest(today)]) : [[], null];
 	const [quotes, bookings, inRepair, flagged] = await Promise.all([
 		seesQuotes ? listQuotes(user) : Promise.resolve([]),
 		seesStock ? listBookings(today) : Promise.resolve([]),
@@ -35,6 +42,8 @@ export async function overviewFor(user: SessionUser): Promise<Overview> {
 		})),
 		quotes: quotes.slice(0, 8),
 		goingOut: bookings.filter((b) => b.startDate <= inAWeek),
-		unitsInRepair: inRepair
+		unitsInRepair: inRepair,
+		late,
+		tests: due && { overdue: due.filter((d) => d.status === 'overdue').length, dueSoon: due.filter((d) => d.status === 'due-soon').length }
 	};
 }

@@ -49,9 +49,7 @@ export async function saveAttachment(input: {
 	if (problem) throw new DomainError(422, problem, { file: [problem] });
 
 	const mimeType = sniffMimeType(input.bytes)!;
-	const storedName = `${randomUUID()}${extensionFor(mimeType)}`;
-	await mkdir(uploadDir(), { recursive: true });
-	await writeFile(storedPath(storedName), input.bytes, { flag: 'wx' });
+	const storedName = await storeFile(input.bytes, mimeType);
 	try {
 		const { row, replaced } = await withTransaction(undefined, async (transaction) => {
 			const where = { modelType: input.modelType, modelId: input.modelId, kind: input.kind };
@@ -75,10 +73,7 @@ export async function saveAttachment(input: {
 export async function readAttachment(id: number): Promise<{ row: AttachmentRow; bytes: Buffer }> {
 	const found = await ModelAttachment.findByPk(id);
 	if (!found) throw new DomainError(404, 'No such attachment.');
-	const bytes = await readFile(storedPath(found.storedName)).catch(() => {
-		throw new DomainError(404, 'The file of this attachment is missing.');
-	});
-	return { row: toRow(found), bytes };
+	return { row: toRow(found), bytes: await readStoredFile(found.storedName) };
 }
 
 export async function deleteAttachment(id: number): Promise<AttachmentRow> {
@@ -87,6 +82,24 @@ export async function deleteAttachment(id: number): Promise<AttachmentRow> {
 	await found.destroy();
 	await removeStoredFiles([found.storedName]);
 	return toRow(found);
+}
+
+/**
+ * Keeps checked bytes (see upload-checks) under a new generated name and returns that name. Other
+ * uploads (damage photos) store through here too, so where files live is decided in one place.
+ */
+export async function storeFile(bytes: Uint8Array, mimeType: string): Promise<string> {
+	const storedName = `${randomUUID()}${extensionFor(mimeType)}`;
+	await mkdir(uploadDir(), { recursive: true });
+	await writeFile(storedPath(storedName), bytes, { flag: 'wx' });
+	return storedName;
+}
+
+/** The bytes stored under a name from storeFile; a missing file is a 404. */
+export async function readStoredFile(storedName: string): Promise<Buffer> {
+	return readFile(storedPath(storedName)).catch(() => {
+		throw new DomainError(404, 'The stored file is missing.');
+	});
 }
 
 /** Best effort: a file left behind is harmless, a row without its file is reported as missing. */

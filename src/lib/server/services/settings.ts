@@ -13,6 +13,8 @@ export interface Settings {
 	distanceUnit: 'm' | 'ft';
 	paymentTermsDays: number;
 	cancellationFullRefundDays: number;
+	/** Days between electrical safety tests for models without their own interval. */
+	testIntervalDays: number;
 }
 
 // Used until an admin saves settings (a fresh install before seeding).
@@ -25,7 +27,8 @@ const DEFAULTS: Settings = {
 	defaultMarginDb: 3,
 	distanceUnit: 'm',
 	paymentTermsDays: 14,
-	cancellationFullRefundDays: 28
+	cancellationFullRefundDays: 28,
+	testIntervalDays: 365
 };
 
 export function getSettings(): Promise<Settings> {

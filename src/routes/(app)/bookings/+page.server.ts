@@ -1,9 +1,11 @@
 import { requireCapability } from '$lib/server/auth/guards';
+import { lateUnits } from '$lib/server/services/booking-life';
 import { listBookings } from '$lib/server/services/pick-lists';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
 	requireCapability(event, 'bookings:read');
 	const today = new Date().toISOString().slice(0, 10);
-	return { bookings: await listBookings(today) };
+	const [bookings, late] = await Promise.all([listBookings(today), lateUnits(today)]);
+	return { bookings, late, today };
 };

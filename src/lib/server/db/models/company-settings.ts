@@ -24,6 +24,8 @@ export class CompanySettings extends Model<
 	declare paymentTermsDays: number;
 	/** Cancelled at least this many days before the hire starts: the deposit is refunded in full. */
 	declare cancellationFullRefundDays: number;
+	/** Default days between electrical safety tests, for models without their own interval. */
+	declare testIntervalDays: CreationOptional<number>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 
@@ -40,6 +42,7 @@ export class CompanySettings extends Model<
 				distanceUnit: { type: DataTypes.ENUM('m', 'ft'), allowNull: false },
 				paymentTermsDays: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
 				cancellationFullRefundDays: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+				testIntervalDays: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 365 },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE
 			},

@@ -1,5 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { Booking, BookingLine, BookingUnit } from './booking';
+import { BookingEvent, DamageReport, ModelTestInterval, Repair } from './out-and-back';
+import { StockUnit } from './stock-unit';
 import { Client } from './client';
 import { CompanySettings } from './company-settings';
 import { Invoice, WebhookEvent } from './invoice';
@@ -8,11 +10,11 @@ import { ProgrammeProfile } from './programme-profile';
 import { Quote } from './quote';
 import { QuoteVersion } from './quote-version';
 
-export { Booking, BookingLine, BookingUnit, CompanySettings, Invoice, OutboundEmail, ProgrammeProfile, Quote, QuoteVersion, WebhookEvent };
+export { Booking, BookingEvent, BookingLine, BookingUnit, DamageReport, ModelTestInterval, Repair, CompanySettings, Invoice, OutboundEmail, ProgrammeProfile, Quote, QuoteVersion, WebhookEvent };
 
 /** Registers the quoting side's models (settings, programmes, quotes, bookings, invoices, mail). */
 export function initQuotingModels(sequelize: Sequelize): void {
-	for (const model of [CompanySettings, ProgrammeProfile, Quote, QuoteVersion, Booking, BookingLine, BookingUnit, OutboundEmail, Invoice, WebhookEvent]) {
+	for (const model of [CompanySettings, ProgrammeProfile, Quote, QuoteVersion, Booking, BookingLine, BookingUnit, OutboundEmail, Invoice, WebhookEvent, BookingEvent, DamageReport, Repair, ModelTestInterval]) {
 		model.initModel(sequelize);
 	}
 	Quote.belongsTo(Client, { foreignKey: 'clientId', as: 'client' });
@@ -25,6 +27,8 @@ export function initQuotingModels(sequelize: Sequelize): void {
 	BookingLine.belongsTo(Booking, { foreignKey: 'bookingId', as: 'booking' });
 	Booking.hasMany(BookingUnit, { foreignKey: 'bookingId', as: 'units' });
 	BookingUnit.belongsTo(Booking, { foreignKey: 'bookingId', as: 'booking' });
+	BookingUnit.belongsTo(StockUnit, { foreignKey: 'stockUnitId', as: 'unit' });
+	Booking.hasMany(BookingEvent, { foreignKey: 'bookingId', as: 'events' });
 	Quote.hasMany(Invoice, { foreignKey: 'quoteId', as: 'invoices' });
 	Invoice.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
 }

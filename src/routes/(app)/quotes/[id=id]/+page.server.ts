@@ -1,7 +1,9 @@
 import { fail } from '@sveltejs/kit';
+import { canAny } from '$lib/permissions';
 import { allowedActions, type QuoteAction } from '$lib/quotes/states';
 import { requireCapability } from '$lib/server/auth/guards';
 import { DomainError, orHttpError } from '$lib/server/services/errors';
+import { hireStateForClient } from '$lib/server/services/booking-life';
 import { applyQuoteAction } from '$lib/server/services/quote-actions';
 import { invoiceBalance } from '$lib/server/services/balance';
 import { getQuote } from '$lib/server/services/quotes';
@@ -11,7 +13,9 @@ export const load: PageServerLoad = async (event) => {
 	const user = requireCapability(event, 'quotes:read');
 	event.depends('app:quotes');
 	const quote = await orHttpError(() => getQuote(Number(event.params.id), user));
-	return { quote, actions: allowedActions(quote.status) };
+	// getQuote already refused a client another organisation's quote, so the hire's state is theirs.
+	const hire = canAny(user.role, 'bookings:read', 'bookings:read-own') ? await hireStateForClient(quote.id) : null;
+	return { quote, actions: allowedActions(quote.status), hire };
 };
 
 function act(action: QuoteAction) {
