@@ -50,7 +50,7 @@ beforeAll(async () => {
 	const accepted = await api(`/api/quotes/${acceptedQuoteId}/actions`, {
 		cookie: await sessionCookie(CLIENT),
 		method: 'POST',
-		body: { action: 'accept' }
+		body: { action: 'accept', acceptTerms: true }
 	});
 	expect(accepted.status).toBe(200);
 }, 120_000);
