@@ -93,7 +93,7 @@ describe('the client answers the quote', () => {
 
 		const reference = (await api(`/api/quotes/${id}`, { cookie: await sessionCookie(SALES) })).json.reference as string;
 		const notice = await waitForMail({ to: deskInbox, subjectIncludes: `accepted the quote: ${reference}`, since, timeoutMs: 10_000 });
-		expect(notice.text).toContain(`/quotes/${id}`);
+		expect(notice.text).toContain(encodeURIComponent(`/quotes/${id}`));
 		const overview = await (await fetch(`${BASE_URL}/`, { headers: { cookie: await sessionCookie(SALES), accept: 'text/html' } })).text();
 		expect(overview).toContain(reference);
 		await page.close();

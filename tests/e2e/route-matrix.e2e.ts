@@ -121,8 +121,8 @@ const TABLE: Record<string, Row> = {
 	'load /signin/help':                         { out: 'ok', admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },
 	'action /signin/help?/link':                 { out: 400, admin: 400, warehouse: 400, sales: 400, client: 400, stranger: 400 }, // no valid e-mail in the form
 	'action /signin/help?/reset':                { out: 400, admin: 400, warehouse: 400, sales: 400, client: 400, stranger: 400 },
-	'load /reset-password/[token]':              { out: 'ok', admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },
-	'action /reset-password/[token]?/default':   { out: 400, admin: 400, warehouse: 400, sales: 400, client: 400, stranger: 400 },
+	'load /signin/reset/[token]':              { out: 'ok', admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },
+	'action /signin/reset/[token]?/default':   { out: 400, admin: 400, warehouse: 400, sales: 400, client: 400, stranger: 400 },
 	'load /account':                             { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },
 	'action /account?/password':                 { out: S, admin: 400, warehouse: 400, sales: 400, client: 400, stranger: 400 },
 	'load /signout':                             { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },

@@ -43,7 +43,7 @@ export async function sentQuoteForNewClient(label: string): Promise<{ id: number
 }
 
 /** The one-time sign-in link in an e-mail's text. */
-export function linkIn(text: string, kind: 'signin/link' | 'reset-password' = 'signin/link'): string {
+export function linkIn(text: string, kind: 'signin/link' | 'signin/reset' = 'signin/link'): string {
 	const match = text.match(new RegExp(`https?://[^\\s]+/${kind}/[\\w-]+`));
 	if (!match) throw new Error(`no ${kind} link in the e-mail`);
 	return match[0];

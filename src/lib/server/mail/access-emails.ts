@@ -19,7 +19,7 @@ export function signInLinkEmail(to: string, token: string, company: string): Ema
 
 /** A password-reset link (asked for by the person, or sent by an admin). */
 export function passwordResetEmail(to: string, token: string, validMinutes: number, company: string, byAdmin: boolean): EmailMessage {
-	const link = `${publicOrigin()}/reset-password/${token}`;
+	const link = `${publicOrigin()}/signin/reset/${token}`;
 	return {
 		to,
 		subject: `Choose a new password for ${company}`,
