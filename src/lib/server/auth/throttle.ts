@@ -5,7 +5,7 @@
  */
 import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
 
-const perNetworkAddress = new RateLimiterMemory({ keyPrefix: 'link-ip', points: 10, duration: 15 * 60 });
+const perNetworkAddress = new RateLimiterMemory({ keyPrefix: 'link-ip', points: 30, duration: 15 * 60 });
 const perEmailAddress = new RateLimiterMemory({ keyPrefix: 'link-email', points: 3, duration: 60 * 60 });
 
 export type ThrottleVerdict = { ok: true } | { ok: false; who: 'network' | 'email'; retryAfterS: number };
