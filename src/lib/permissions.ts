@@ -65,6 +65,7 @@ export interface NavItem {
 export const NAVIGATION: readonly NavItem[] = [
 	{ href: '/', label: 'Overview', capability: 'overview:read' },
 	{ href: '/quotes', label: 'Quotes', capability: 'quotes:read' },
+	{ href: '/clients', label: 'Clients', capability: 'clients:read' },
 	{ href: '/bookings', label: 'Bookings', capability: 'bookings:read' },
 	{ href: '/inventory', label: 'Inventory', capability: 'inventory:read' },
 	{ href: '/admin/users', label: 'Users', capability: 'users:manage' },

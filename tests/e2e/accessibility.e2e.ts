@@ -50,7 +50,7 @@ beforeAll(async () => {
 	const accepted = await api(`/api/quotes/${acceptedQuoteId}/actions`, {
 		cookie: await sessionCookie(CLIENT),
 		method: 'POST',
-		body: { action: 'accept' }
+		body: { action: 'accept', acceptTerms: true }
 	});
 	expect(accepted.status).toBe(200);
 }, 120_000);
@@ -85,6 +85,8 @@ describe('every main page passes axe (no serious or critical findings), fits a p
 		const page = await context.newPage();
 		await checkAll(page, [
 			{ name: 'signin', path: '/signin' },
+			{ name: 'signin-help', path: '/signin/help' },
+			{ name: 'signin-reset-expired', path: '/signin/reset/not-a-real-reset-token-at-all' },
 			{
 				name: 'signin-error',
 				path: '/signin',
@@ -139,7 +141,10 @@ describe('every main page passes axe (no serious or critical findings), fits a p
 			{ name: 'quote-sales', path: `/quotes/${sentQuoteId}`, ready: openAllDetails },
 			{ name: 'quote-edit', path: `/quotes/${sentQuoteId}/edit`, ready: resultsShown },
 			{ name: 'quote-print', path: `/quotes/${sentQuoteId}/print` },
-			{ name: 'quote-accepted-sales', path: `/quotes/${acceptedQuoteId}` }
+			{ name: 'quote-accepted-sales', path: `/quotes/${acceptedQuoteId}` },
+			{ name: 'clients', path: '/clients' },
+			{ name: 'client-detail', path: `/clients/${clientId}` },
+			{ name: 'account-sales', path: '/account' }
 		]);
 		await context.close();
 	}, 240_000);
@@ -176,6 +181,7 @@ describe('every main page passes axe (no serious or critical findings), fits a p
 			{ name: 'admin-users', path: '/admin/users' },
 			{ name: 'admin-programmes', path: '/admin/programmes' },
 			{ name: 'admin-settings', path: '/admin/settings' },
+			{ name: 'admin-settings-logo', path: '/admin/settings/logo' },
 			{ name: 'bookings', path: '/bookings' }
 		];
 		await page.goto(`${BASE_URL}/admin/programmes`);

@@ -45,6 +45,7 @@ describe('the client accepts and pays the deposit', () => {
 		await signIn(page, CLIENT);
 		await page.waitForURL(`${BASE_URL}/`);
 		await page.goto(`${BASE_URL}/quotes/${id}`);
+		await page.getByLabel(/accept them/).check();
 		await page.getByRole('button', { name: 'Accept this quote' }).click();
 		await page.getByRole('link', { name: 'Pay the deposit online' }).click();
 		await page.getByText(/test stand-in/i).first().waitFor();

@@ -36,6 +36,8 @@ import {
 	quoteReviseSchema
 } from '../../src/lib/schemas/quotes';
 import { userCreateSchema, userUpdateSchema } from '../../src/lib/schemas/users';
+import { clientSchema, clientUpdateSchema } from '../../src/lib/schemas/clients';
+import { linkRequestSchema } from '../../src/lib/schemas/access';
 import { BASE_URL } from './browser';
 import { api } from './http';
 import { fieldsOf, hostileCsvBody, hostileJsonBody, type HostileBody } from './proof/hostile';
@@ -69,6 +71,11 @@ const TARGETS: Record<string, Target> = {
 	'POST /api/users': { as: 'admin', body: 'json', schema: userCreateSchema },
 	'PATCH /api/users/[id=id]': { as: 'admin', body: 'json', schema: userUpdateSchema },
 	'POST /api/evaluations': { as: 'sales', body: 'json', schema: evaluationRequestSchema },
+	'POST /api/clients': { as: 'sales', body: 'json', schema: clientSchema },
+	'PATCH /api/clients/[id=id]': { as: 'sales', body: 'json', schema: clientUpdateSchema },
+	// Open to the signed-out: asking for a link is how they get back in.
+	'POST /api/sign-in-links': { as: 'out', body: 'json', schema: linkRequestSchema },
+	'POST /api/password-resets': { as: 'out', body: 'json', schema: linkRequestSchema },
 	'POST /api/loudspeakers': { as: 'warehouse', body: 'json', schema: loudspeakerSchema },
 	'PATCH /api/loudspeakers/[id=id]': {
 		as: 'warehouse',

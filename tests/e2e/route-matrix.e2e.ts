@@ -101,6 +101,15 @@ const TABLE: Record<string, Row> = {
 	'PATCH /api/quotes/[id=id]':                 { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
 	// A real move ("accept") on the cancelled quote: 409 for those who may try, 404 for another client.
 	'POST /api/quotes/[id=id]/actions':          { out: S, admin: 409, warehouse: D, sales: 409, client: 409, stranger: 'missing', quote: 'cancelled', json: { action: 'accept' } },
+	'GET /api/quotes/[id=id]/document':         { out: S, admin: 'ok', warehouse: D, sales: 'ok', client: 'ok', stranger: 'missing' }, // the PDF: staff and the owning client
+	'GET /api/company-logo':                     { out: S, admin: 'missing', warehouse: D, sales: 'missing', client: 'missing', stranger: 'missing' }, // no logo in the test world
+	'GET /api/clients':                          { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'POST /api/clients':                         { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
+	'GET /api/clients/[id=id]':                  { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'PATCH /api/clients/[id=id]':                { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
+	// Getting back in is open to everyone; an unreadable body is 400 before anything is looked up.
+	'POST /api/sign-in-links':                   { out: 400, admin: 400, warehouse: 400, sales: 400, client: 400, stranger: 400 },
+	'POST /api/password-resets':                 { out: 400, admin: 400, warehouse: 400, sales: 400, client: 400, stranger: 400 },
 	'POST /api/quotes/[id=id]/balance-invoice':  { out: S, admin: 409, warehouse: D, sales: 409, client: D, stranger: D }, // the sent quote is not confirmed
 
 	'GET /api/bookings':                         { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' }, // a client lists only their own
@@ -120,12 +129,29 @@ const TABLE: Record<string, Row> = {
 	// The one-time link is its own authentication: open to all; an unknown token is 410 Gone.
 	'load /signin/link/[token]':                 { out: 'ok', admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },
 	'action /signin/link/[token]?/default':      { out: 410, admin: 410, warehouse: 410, sales: 410, client: 410, stranger: 410 },
+	'load /signin/help':                         { out: 'ok', admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },
+	'action /signin/help?/link':                 { out: 400, admin: 400, warehouse: 400, sales: 400, client: 400, stranger: 400 }, // no valid e-mail in the form
+	'action /signin/help?/reset':                { out: 400, admin: 400, warehouse: 400, sales: 400, client: 400, stranger: 400 },
+	'load /signin/reset/[token]':              { out: 'ok', admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },
+	'action /signin/reset/[token]?/default':   { out: 400, admin: 400, warehouse: 400, sales: 400, client: 400, stranger: 400 },
+	'load /account':                             { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },
+	'action /account?/password':                 { out: S, admin: 400, warehouse: 400, sales: 400, client: 400, stranger: 400 },
 	'load /signout':                             { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'ok' },
 	'action /signout?/default':                  { out: S, admin: S, warehouse: S, sales: S, client: S, stranger: S }, // signing out lands on sign-in
 
 	'load /admin/users':                         { out: S, admin: 'ok', warehouse: D, sales: D, client: D, stranger: D },
 	'action /admin/users?/create':               { out: S, admin: 'allowed', warehouse: D, sales: D, client: D, stranger: D },
 	'action /admin/users?/update':               { out: S, admin: 'allowed', warehouse: D, sales: D, client: D, stranger: D },
+	'action /admin/users?/sendReset':            { out: S, admin: 400, warehouse: D, sales: D, client: D, stranger: D }, // the form names nobody
+	'load /admin/settings/logo':                 { out: S, admin: 'ok', warehouse: D, sales: D, client: D, stranger: D },
+	'action /admin/settings/logo?/upload':       { out: S, admin: 422, warehouse: D, sales: D, client: D, stranger: D },
+	'action /admin/settings/logo?/remove':       { out: S, admin: 409, warehouse: D, sales: D, client: D, stranger: D }, // no logo to remove
+	'load /clients':                             { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'action /clients?/create':                   { out: S, admin: 400, warehouse: D, sales: 400, client: D, stranger: D },
+	'load /clients/[id=id]':                     { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'action /clients/[id=id]?/save':             { out: S, admin: 400, warehouse: D, sales: 400, client: D, stranger: D },
+	'action /clients/[id=id]?/addContact':       { out: S, admin: 400, warehouse: D, sales: 400, client: D, stranger: D },
+	'action /clients/[id=id]?/updateContact':    { out: S, admin: 400, warehouse: D, sales: 400, client: D, stranger: D },
 	'load /admin/settings':                      { out: S, admin: 'ok', warehouse: D, sales: D, client: D, stranger: D },
 	'action /admin/settings?/default':           { out: S, admin: 'allowed', warehouse: D, sales: D, client: D, stranger: D },
 	'load /admin/programmes':                    { out: S, admin: 'ok', warehouse: D, sales: D, client: D, stranger: D },
@@ -207,6 +233,8 @@ const TABLE: Record<string, Row> = {
 	// State moves on the cancelled quote: none is legal (409), so only the guard's answer differs.
 	'action /quotes/[id=id]?/send':              { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' },
 	'action /quotes/[id=id]?/accept':            { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: 'allowed', stranger: 'missing', quote: 'cancelled' },
+	'action /quotes/[id=id]?/decline':           { out: S, admin: D, warehouse: D, sales: D, client: 409, stranger: 'missing', quote: 'cancelled' },
+	'action /quotes/[id=id]?/requestChange':     { out: S, admin: D, warehouse: D, sales: D, client: 409, stranger: 'missing', quote: 'cancelled' },
 	'action /quotes/[id=id]?/cancel':            { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' },
 	'action /quotes/[id=id]?/close':             { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' },
 	'action /quotes/[id=id]?/balance':           { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' }
@@ -215,7 +243,7 @@ const TABLE: Record<string, Row> = {
 /** Well-formed (so it reaches the lookup) but issued to nobody. */
 const UNKNOWN_LINK_TOKEN = 'proof-suite-unknown-link-token';
 
-type Ids = InventoryFixtures & QuoteFixtures & { userId: number; programmeSlug: string };
+type Ids = InventoryFixtures & QuoteFixtures & { userId: number; clientId: number; programmeSlug: string };
 
 let sessions: Sessions;
 let ids: Ids;
@@ -232,6 +260,7 @@ function idFor(collection: string, row: Row): number {
 		bookings: ids.bookingId,
 		'damage-reports': ids.unitId,
 		users: ids.userId,
+		clients: ids.clientId,
 		quotes: row.quote === 'cancelled' ? ids.cancelledQuoteId : ids.sentQuoteId
 	};
 	const id = byCollection[collection];
@@ -279,6 +308,7 @@ beforeAll(async () => {
 		...inventory,
 		...quotes,
 		userId: (users.json as { id: number }[])[0].id,
+		clientId: (users.json as { clientId: number | null }[]).find((u) => u.clientId !== null)!.clientId!,
 		programmeSlug: await programmeSlug()
 	};
 }, 120_000);

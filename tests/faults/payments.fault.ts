@@ -39,7 +39,7 @@ async function accept(id: number, client: string, timeoutMs: number) {
 	return api(`/api/quotes/${id}/actions`, {
 		cookie: client,
 		method: 'POST',
-		body: { action: 'accept' },
+		body: { action: 'accept', acceptTerms: true },
 		timeoutMs
 	});
 }

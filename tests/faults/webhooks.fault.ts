@@ -52,7 +52,7 @@ describe('webhooks delivered twice, late and out of order', () => {
 		const accepted = await api(`/api/quotes/${id}/actions`, {
 			cookie: client,
 			method: 'POST',
-			body: { action: 'accept' },
+			body: { action: 'accept', acceptTerms: true },
 			timeoutMs: 10_000
 		});
 		expect(accepted.status, accepted.text).toBe(200);
@@ -116,7 +116,7 @@ describe('webhooks delivered twice, late and out of order', () => {
 			const accepting = api(`/api/quotes/${id}/actions`, {
 				cookie: client,
 				method: 'POST',
-				body: { action: 'accept' },
+				body: { action: 'accept', acceptTerms: true },
 				timeoutMs: 40_000
 			});
 			accepting.catch(() => undefined); // awaited below; keep an early failure from going unhandled

@@ -38,7 +38,12 @@ export const settingsSchema = z.object({
 	distanceUnit: z.enum(['m', 'ft']),
 	paymentTermsDays: z.number().int().min(0).max(120),
 	cancellationFullRefundDays: z.number().int().min(0).max(365),
-	testIntervalDays: z.number().int('Whole days').min(1, 'At least 1 day').max(1825, 'At most 5 years (1825 days)').default(365)
+	testIntervalDays: z.number().int('Whole days').min(1, 'At least 1 day').max(1825, 'At most 5 years (1825 days)').default(365),
+	quoteValidityDays: z.number().int().min(1, 'At least 1 day').max(365, 'At most 365 days').default(30),
+	companyAddress: z.string().trim().max(1000).default(''),
+	companyTaxNumber: z.string().trim().max(60).default(''),
+	companyContact: z.string().trim().max(200).default(''),
+	salesDeskEmail: z.union([z.literal(''), z.string().trim().toLowerCase().max(254).pipe(z.email('Enter a valid e-mail address'))]).default('')
 });
 export type SettingsInput = z.infer<typeof settingsSchema>;
 

@@ -33,7 +33,16 @@ export type QuoteCreateInput = z.infer<typeof quoteCreateSchema>;
 export const quoteReviseSchema = z.object(quoteFields);
 export type QuoteReviseInput = z.infer<typeof quoteReviseSchema>;
 
-export const quoteActionSchema = z.object({ action: z.enum(QUOTE_ACTIONS, { error: 'Unknown action' }) });
+/**
+ * A move on a quote. A client accepting must confirm the terms (`acceptTerms: true`); a change
+ * request carries the client's message, a decline may.
+ */
+export const quoteActionSchema = z.object({
+	action: z.enum(QUOTE_ACTIONS, { error: 'Unknown action' }),
+	acceptTerms: z.boolean().optional(),
+	message: z.string().trim().max(4000).optional()
+});
+export type QuoteActionInput = z.infer<typeof quoteActionSchema>;
 
 // ---- The desk's request form: flat fields so it works without JavaScript and names map to inputs.
 

@@ -29,3 +29,24 @@ export const userUpdateSchema = z
 	.partial()
 	.strict();
 export type UserUpdateInput = z.infer<typeof userUpdateSchema>;
+
+/**
+ * The "add a person" form: the role starts empty and must be chosen (a new account never becomes an
+ * admin by default). Valid data is a UserCreateInput.
+ */
+export const userCreateFormSchema = z
+	.object({
+		email: z.string().trim().toLowerCase().max(254).pipe(z.email('Enter a valid e-mail address')),
+		name: z.string().trim().min(2, 'Enter the person’s name').max(120),
+		role: z.enum(['', ...ROLES]).default('').refine((r) => r !== '', 'Choose a role'),
+		password: z
+			.string()
+			.max(200)
+			.refine((p) => p === '' || p.length >= 10, 'Use at least 10 characters, or leave empty to generate one')
+			.default(''),
+		clientId: z.coerce.number().int().positive().nullable().default(null)
+	})
+	.refine((u) => u.role !== 'client' || u.clientId !== null, {
+		path: ['clientId'],
+		message: 'A client account belongs to a client organisation; choose one'
+	});

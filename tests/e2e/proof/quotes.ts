@@ -61,7 +61,11 @@ async function createQuote(sessions: Sessions, clientId: number, label: string):
 
 export async function act(cookie: string | undefined, id: number, action: string): Promise<void> {
 	must(
-		await api(`/api/quotes/${id}/actions`, { cookie, method: 'POST', body: { action } }),
+		await api(`/api/quotes/${id}/actions`, {
+			cookie,
+			method: 'POST',
+			body: action === 'accept' ? { action, acceptTerms: true } : { action }
+		}),
 		200,
 		`${action} quote ${id}`
 	);

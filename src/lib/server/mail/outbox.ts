@@ -8,6 +8,14 @@ export interface EmailMessage {
 	text: string;
 	html?: string;
 	quoteId?: number | null;
+	/** Files sent with the message (e.g. the quote document); kept in the outbox so a retry sends them too. */
+	attachments?: MailAttachment[];
+}
+
+export interface MailAttachment {
+	filename: string;
+	contentType: string;
+	content: Buffer;
 }
 
 const MAX_ATTEMPTS = 5;
@@ -20,7 +28,10 @@ export async function queueEmail(message: EmailMessage, transaction?: Transactio
 			subject: message.subject.slice(0, 200),
 			textBody: message.text,
 			htmlBody: message.html ?? null,
-			quoteId: message.quoteId ?? null
+			quoteId: message.quoteId ?? null,
+			attachments: message.attachments?.length
+				? message.attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, contentBase64: a.content.toString('base64') }))
+				: null
 		},
 		{ transaction }
 	);
@@ -34,7 +45,8 @@ export async function deliver(email: OutboundEmail): Promise<boolean> {
 			to: email.toAddress,
 			subject: email.subject,
 			text: email.textBody,
-			html: email.htmlBody ?? undefined
+			html: email.htmlBody ?? undefined,
+			attachments: (email.attachments ?? []).map((a) => ({ filename: a.filename, contentType: a.contentType, content: Buffer.from(a.contentBase64, 'base64') }))
 		});
 		await email.update({ status: 'sent', attempts: email.attempts + 1, sentAt: new Date(), lastError: null });
 		return true;

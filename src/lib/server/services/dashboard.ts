@@ -1,12 +1,14 @@
 /** The overview page: what each role should look at first. */
 import { Op } from 'sequelize';
 import { quoteReference } from '$lib/quotes/reference';
+import type { ClientResponse } from '$lib/quotes/states';
 import { Quote, StockUnit } from '../db';
 import type { SessionUser } from '../users';
 import { lateUnits, type LateUnit } from './booking-life';
 import { listBookings, type BookingSummary } from './pick-lists';
 import { unitsDueForTest } from './safety-tests';
 import { listQuotes, type QuoteSummary } from './quotes';
+import { recentDeskNotices, type DeskNoticeRow } from './desk-notices';
 
 export interface Overview {
 	attention: { id: number; reference: string; eventName: string; why: string }[];
@@ -17,7 +19,11 @@ export interface Overview {
 	late: LateUnit[];
 	/** Units overdue for their electrical safety test, and due within two weeks (staff only). */
 	tests: { overdue: number; dueSoon: number } | null;
+	/** What clients did lately (accepted, declined, asked for a change, paid): desk only. */
+	notices: DeskNoticeRow[];
 }
+
+const CLIENT_ANSWER_WHY = { declined: 'The client declined it', 'change-requested': 'The client asked for a change' } as const;
 
 export async function overviewFor(user: SessionUser): Promise<Overview> {
 	const today = new Date().toISOString().slice(0, 10);
@@ -25,21 +31,31 @@ export async function overviewFor(user: SessionUser): Promise<Overview> {
 	const seesQuotes = user.role !== 'warehouse';
 	const seesStock = user.role !== 'client';
 	const [late, due] = seesStock ? await Promise.all([lateUnits(today), unitsDueForTest(today)]) : [[], null];
-	const [quotes, bookings, inRepair, flagged] = await Promise.all([
+	const isDesk = user.role === 'sales' || user.role === 'admin';
+	const [quotes, bookings, inRepair, flagged, notices] = await Promise.all([
 		seesQuotes ? listQuotes(user) : Promise.resolve([]),
 		seesStock ? listBookings(today) : Promise.resolve([]),
 		seesStock ? StockUnit.count({ where: { status: 'in-repair' } }) : Promise.resolve(null),
-		user.role === 'sales' || user.role === 'admin'
-			? Quote.findAll({ where: { [Op.or]: [{ needsRecheck: true }, { bookingIssue: { [Op.ne]: null } }], status: { [Op.notIn]: ['cancelled', 'closed'] } }, order: [['updatedAt', 'DESC']], limit: 10 })
-			: Promise.resolve([])
+		isDesk
+			? Quote.findAll({
+					where: {
+						[Op.or]: [{ needsRecheck: true }, { bookingIssue: { [Op.ne]: null } }, { clientResponse: { [Op.ne]: null }, status: 'draft' }],
+						status: { [Op.notIn]: ['cancelled', 'closed'] }
+					},
+					order: [['updatedAt', 'DESC']],
+					limit: 10
+				})
+			: Promise.resolve([]),
+		isDesk ? recentDeskNotices(8) : Promise.resolve([])
 	]);
 	return {
 		attention: flagged.map((q) => ({
 			id: q.id,
 			reference: quoteReference(q.id),
 			eventName: q.eventName,
-			why: q.bookingIssue ?? q.recheckReason ?? 'Needs a look'
+			why: q.bookingIssue ?? q.recheckReason ?? (q.clientResponse ? CLIENT_ANSWER_WHY[q.clientResponse as ClientResponse] : 'Needs a look')
 		})),
+		notices,
 		quotes: quotes.slice(0, 8),
 		goingOut: bookings.filter((b) => b.startDate <= inAWeek),
 		unitsInRepair: inRepair,

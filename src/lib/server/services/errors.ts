@@ -3,7 +3,7 @@ import { error } from '@sveltejs/kit';
 /** A rule of the business that refused a request; routes turn it into the matching HTTP answer. */
 export class DomainError extends Error {
 	constructor(
-		readonly status: 400 | 403 | 404 | 409 | 422 | 503,
+		readonly status: 400 | 403 | 404 | 409 | 422 | 429 | 503,
 		message: string,
 		readonly errors?: Record<string, string[]>
 	) {

@@ -11,7 +11,8 @@ import { deliver, queueEmail, type EmailMessage } from '../mail/outbox';
 import { bookingConfirmedEmail, bookingHeldUpEmail, receiptEmail } from '../mail/payment-emails';
 import { reservationTransaction, reserveStockForQuote } from './bookings';
 import { quoteReference } from '$lib/quotes/reference';
-import { getSettings } from './settings';
+import { getSettings, type Settings } from './settings';
+import { noteForDesk } from './desk-notices';
 
 export type EventOutcome = { status: 200 | 503; outcome: string };
 
@@ -21,11 +22,12 @@ export async function applyStripeEvent(event: Stripe.Event): Promise<EventOutcom
 	let emailIds: number[] = [];
 	// Read before the transaction: a query outside it while every pooled connection is held by
 	// transactions queued on the same row locks would wait for a connection that never frees.
-	const company = (await getSettings()).companyName;
+	const settings = await getSettings();
+	const company = settings.companyName;
 	try {
 		const outcome = await reservationTransaction(async (transaction) => {
 			await WebhookEvent.create({ id: event.id, type: event.type, outcome: 'applying' }, { transaction });
-			const result = await route(event, { t: transaction, company });
+			const result = await route(event, { t: transaction, company, settings });
 			emailIds = result.emailIds;
 			await WebhookEvent.update({ outcome: result.outcome }, { where: { id: event.id }, transaction });
 			return result.outcome;
@@ -46,6 +48,7 @@ type Applied = { outcome: string; emailIds: number[] };
 interface Ctx {
 	t: Transaction;
 	company: string;
+	settings: Settings;
 }
 
 async function route(event: Stripe.Event, ctx: Ctx): Promise<Applied> {
@@ -89,6 +92,9 @@ async function invoicePaid(object: Stripe.Invoice, ctx: Ctx): Promise<Applied> {
 	const quote = (await Quote.findByPk(invoice.quoteId, { transaction: t, lock: t.LOCK.UPDATE }))!;
 	const emailIds = [await emailTo(quote, (to, q, c) => receiptEmail(to, q, invoice.amountMinor, invoice.currency, c), ctx)];
 	if (invoice.kind !== 'deposit') return { outcome: 'balance paid', emailIds };
+	// The desk hears of every paid deposit, whatever becomes of the booking.
+	const notice = await noteForDesk(quote, 'paid', null, ctx.settings, t);
+	if (notice) emailIds.push(notice);
 
 	if (!nextStatus(quote.status, 'pay-deposit')) {
 		// Paid for a quote no longer waiting for it (e.g. cancelled meanwhile): keep the money visible to the desk.

@@ -30,7 +30,7 @@ async function sentQuote(units = 2) {
 }
 
 async function acceptAndPay(quoteId: number, client: Parameters<typeof applyQuoteAction>[2], card = CARD_SUCCEEDS) {
-	const { quote } = await applyQuoteAction(quoteId, 'accept', client);
+	const { quote } = await applyQuoteAction(quoteId, { action: 'accept', acceptTerms: true }, client);
 	const deposit = quote.invoices.find((i) => i.kind === 'deposit')!;
 	const stripeId = (await Invoice.findByPk(deposit.id))!.stripeInvoiceId;
 	const paid = await payOnHostedPage(deposit.hostedUrl!, card);
@@ -81,14 +81,14 @@ describe('deposit and booking', () => {
 		const { quote, client } = await sentQuote();
 		await fakeConfig({ failNext: 6 });
 		try {
-			await expect(applyQuoteAction(quote.id, 'accept', client)).rejects.toMatchObject({ status: 503, message: expect.stringMatching(/not answering/) });
+			await expect(applyQuoteAction(quote.id, { action: 'accept', acceptTerms: true }, client)).rejects.toMatchObject({ status: 503, message: expect.stringMatching(/not answering/) });
 		} finally {
 			await fakeConfig({ failNext: 0 });
 		}
 		expect((await getQuote(quote.id, client)).status).toBe('sent');
 		expect(await Invoice.count({ where: { quoteId: quote.id } })).toBe(0);
 		// And it works once the service is back; the retry reuses the same idempotency keys.
-		expect((await applyQuoteAction(quote.id, 'accept', client)).quote.status).toBe('accepted');
+		expect((await applyQuoteAction(quote.id, { action: 'accept', acceptTerms: true }, client)).quote.status).toBe('accepted');
 	});
 
 	it('cancelling a confirmed hire long before it starts refunds the deposit and frees the stock', async () => {

@@ -1,5 +1,7 @@
 /** Moving a quote through its states: one row lock per move, illegal moves refused with 409. */
-import { nextStatus, type QuoteAction, type QuoteStatus } from '$lib/quotes/states';
+import { isExpired, nextStatus, type QuoteAction, type QuoteStatus } from '$lib/quotes/states';
+import { quoteTerms, validUntilFor } from '$lib/quotes/terms';
+import type { QuoteActionInput } from '$lib/schemas/quotes';
 import { db, Client, OutboundEmail, Quote } from '../db';
 import { deliver, queueEmail } from '../mail/outbox';
 import { invoiceEmail } from '../mail/payment-emails';
@@ -7,15 +9,18 @@ import { quoteSentEmail } from '../mail/quote-emails';
 import { clientAccountFor, createSignInLink } from '../auth/sign-in-links';
 import type { SessionUser } from '../users';
 import { cancelMoney } from './cancellation';
+import { noteForDesk } from './desk-notices';
 import { DomainError } from './errors';
 import { issueStripeInvoice, saveIssuedInvoice, voidOrphanInvoice, type IssuedInvoice } from './invoices';
+import { quoteDocumentFor } from './quote-document';
 import { getQuote, type QuoteDetail } from './quotes';
 import { releaseBooking } from './bookings';
-import { getSettings } from './settings';
+import { getSettings, type Settings } from './settings';
 
 // Deposit and confirmation follow a paid invoice; nobody moves a quote there by hand.
 const STAFF_ACTIONS: readonly QuoteAction[] = ['send', 'accept', 'cancel', 'close'];
-const CLIENT_ACTIONS: readonly QuoteAction[] = ['accept'];
+const CLIENT_ACTIONS: readonly QuoteAction[] = ['accept', 'decline', 'request-change'];
+const CLIENT_ANSWERS = { decline: 'declined', 'request-change': 'change-requested' } as const;
 
 const TIMESTAMPS: Partial<Record<QuoteStatus, 'sentAt' | 'acceptedAt' | 'cancelledAt'>> = {
 	sent: 'sentAt',
@@ -29,23 +34,56 @@ export interface ActionOutcome {
 	mailSent?: boolean;
 }
 
-export async function applyQuoteAction(id: number, action: QuoteAction, actor: SessionUser): Promise<ActionOutcome> {
+const today = () => new Date().toISOString().slice(0, 10);
+
+/** The terms as the client sees them on the quote (and as they are stored on acceptance). */
+export function termsFor(quote: QuoteDetail, settings: Settings): string[] {
+	const p = quote.result.price;
+	return quoteTerms({
+		depositMinor: p.depositMinor,
+		depositBp: p.depositBp,
+		currency: p.currency,
+		paymentTermsDays: settings.paymentTermsDays,
+		cancellationFullRefundDays: settings.cancellationFullRefundDays,
+		validUntil: quote.validUntil
+	});
+}
+
+/** Refusals that need no lock: checked before any money moves, so a refused accept changes nothing. */
+function refuseEarly(before: QuoteDetail, input: QuoteActionInput, actor: SessionUser): void {
+	if (input.action === 'accept' && isExpired(before.validUntil, today())) {
+		throw new DomainError(409, `This quote was valid until ${before.validUntil} and can no longer be accepted. Ask us for a fresh one.`);
+	}
+	if (input.action === 'accept' && actor.role === 'client' && input.acceptTerms !== true) {
+		throw new DomainError(422, 'Read the terms and tick the box to accept them.', { acceptTerms: ['Tick to confirm you accept the terms'] });
+	}
+	if (input.action === 'request-change' && !input.message) {
+		throw new DomainError(422, 'Tell us what you would like changed.', { message: ['Describe the change you need'] });
+	}
+}
+
+export async function applyQuoteAction(id: number, input: QuoteActionInput | QuoteAction, actor: SessionUser): Promise<ActionOutcome> {
+	const request: QuoteActionInput = typeof input === 'string' ? { action: input } : input;
+	const { action } = request;
 	const allowed = actor.role === 'client' ? CLIENT_ACTIONS : STAFF_ACTIONS;
 	if (!allowed.includes(action)) throw new DomainError(403, 'Your role cannot do that to a quote.');
 	const before = await getQuote(id, actor); // 404 for a quote the actor may not see
 	if (!nextStatus(before.status, action)) {
 		throw new DomainError(409, `A quote that is ${before.status} cannot be given “${action}”.`);
 	}
+	refuseEarly(before, request, actor);
 
 	// Money first, outside our transaction: if the payment service is down nothing below happens.
 	const deposit = action === 'accept' ? await issueStripeInvoice(before, 'deposit') : null;
 	const refund = action === 'cancel' ? await cancelMoney(before) : null;
 
 	// Outside the transaction, so it never waits for a second pooled connection while holding locks.
-	const company = (await getSettings()).companyName;
-	let emailId: number | null = null;
+	const settings = await getSettings();
+	const company = settings.companyName;
+	const attachment = action === 'send' ? await quoteDocumentFor(id, actor, { validUntil: validUntilFor(today(), settings.quoteValidityDays) }) : null;
+	let emailIds: number[] = [];
 	try {
-		emailId = await db().transaction(async (transaction) => {
+		emailIds = await db().transaction(async (transaction) => {
 			const quote = await Quote.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
 			const next = quote && nextStatus(quote.status, action);
 			if (!quote || !next) throw new DomainError(409, 'The quote changed meanwhile; reload and try again.');
@@ -55,25 +93,42 @@ export async function applyQuoteAction(id: number, action: QuoteAction, actor: S
 			const stamp = TIMESTAMPS[next];
 			await quote.update({ status: next, ...(stamp ? { [stamp]: new Date() } : {}) }, { transaction });
 			const client = (await Client.findByPk(quote.clientId, { transaction }))!;
+			const byClient = actor.role === 'client';
 			if (action === 'cancel') await releaseBooking(id, transaction);
 			if (action === 'send') {
+				await quote.update({ validUntil: validUntilFor(today(), settings.quoteValidityDays), clientResponse: null }, { transaction });
 				const account = await clientAccountFor(client, transaction);
 				const token = await createSignInLink(account.id, `/quotes/${id}`, transaction);
-				return (await queueEmail(quoteSentEmail({ ...before, status: next }, client.email, company, token), transaction)).id;
+				const sent = { ...before, status: next, validUntil: quote.validUntil };
+				return [(await queueEmail({ ...quoteSentEmail(sent, client.email, company, token), attachments: attachment ? [attachment] : [] }, transaction)).id];
 			}
+			if (action === 'decline' || action === 'request-change') {
+				await quote.update({ clientResponse: CLIENT_ANSWERS[action], clientMessage: request.message || null, respondedAt: new Date() }, { transaction });
+				const notice = await noteForDesk(quote, CLIENT_ANSWERS[action], request.message || null, settings, transaction);
+				return notice ? [notice] : [];
+			}
+			const ids: number[] = [];
 			if (deposit) {
+				await quote.update({ acceptedById: actor.id, acceptedTerms: termsFor(before, settings).join('\n'), clientResponse: null }, { transaction });
 				await saveIssuedInvoice(id, 'deposit', deposit, transaction);
-				return (await queueEmail(depositMail(client.email, before, deposit, company), transaction)).id;
+				ids.push((await queueEmail(depositMail(client.email, before, deposit, company), transaction)).id);
+				const notice = byClient ? await noteForDesk(quote, 'accepted', null, settings, transaction) : null;
+				if (notice) ids.push(notice);
 			}
-			if (refund) return (await queueEmail(refund.email(client.email, company), transaction)).id;
-			return null;
+			if (refund) ids.push((await queueEmail(refund.email(client.email, company), transaction)).id);
+			return ids;
 		});
 	} catch (err) {
 		if (deposit) await voidOrphanInvoice(deposit.stripeInvoiceId);
 		throw err;
 	}
 
-	const mailSent = emailId === null ? undefined : await deliver((await OutboundEmail.findByPk(emailId))!);
+	// The client's own e-mail decides `mailSent`; a desk notice that fails stays queued for retry.
+	let mailSent: boolean | undefined;
+	for (const [i, emailId] of emailIds.entries()) {
+		const sent = await deliver((await OutboundEmail.findByPk(emailId))!);
+		if (i === 0) mailSent = sent;
+	}
 	return { quote: await getQuote(id, actor), ...(mailSent !== undefined ? { mailSent } : {}) };
 }
 

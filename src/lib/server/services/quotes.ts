@@ -1,11 +1,11 @@
 /** Saving and reading quotes. A quote keeps every version; each version snapshots what was priced. */
 import type { Transaction } from 'sequelize';
 import type { PackageResult } from '$lib/quotes/evaluate-packages';
-import { isEditable, type QuoteStatus } from '$lib/quotes/states';
+import { isEditable, type ClientResponse, type QuoteStatus } from '$lib/quotes/states';
 import type { QuoteCreateInput, QuoteReviseInput } from '$lib/schemas/quotes';
 import type { QuoteRequestInput } from '$lib/schemas/evaluation';
 import { quoteReference } from '$lib/quotes/reference';
-import { db, Client, OutboundEmail, Quote, QuoteVersion } from '../db';
+import { db, Client, OutboundEmail, Quote, QuoteVersion, User } from '../db';
 import { invoicesFor, type InvoiceRow } from './invoice-rows';
 import type { SessionUser } from '../users';
 import { DomainError } from './errors';
@@ -25,6 +25,8 @@ export interface QuoteSummary {
 	totalMinor: number;
 	currency: string;
 	needsRecheck: boolean;
+	/** The client's answer that handed the quote back to the desk (declined or asked for a change). */
+	clientResponse: ClientResponse | null;
 	updatedAt: string;
 }
 
@@ -41,6 +43,11 @@ export interface QuoteDetail extends QuoteSummary {
 	invoices: InvoiceRow[];
 	/** Set when a paid deposit could not become a booking: the desk must act. */
 	bookingIssue: string | null;
+	/** The last day it may be accepted (set when sent). */
+	validUntil: string | null;
+	acceptance: { byName: string; at: string; terms: string[] } | null;
+	clientMessage: string | null;
+	respondedAt: string | null;
 }
 
 /** Prices and evaluates one package for the request now; a refusal to quote is a 422 on packageId. */
@@ -144,6 +151,7 @@ function summaryOf(quote: Quote & { client?: Client; versions?: QuoteVersion[] }
 		totalMinor: current.price.totalMinor,
 		currency: current.price.currency,
 		needsRecheck: quote.needsRecheck,
+		clientResponse: quote.clientResponse,
 		updatedAt: quote.updatedAt.toISOString()
 	};
 }
@@ -197,6 +205,16 @@ export async function getQuote(id: number, actor: SessionUser): Promise<QuoteDet
 		sentAt: quote.sentAt?.toISOString() ?? null,
 		acceptedAt: quote.acceptedAt?.toISOString() ?? null,
 		invoices: await invoicesFor(id),
-		bookingIssue: actor.role === 'client' ? null : quote.bookingIssue
+		bookingIssue: actor.role === 'client' ? null : quote.bookingIssue,
+		validUntil: quote.validUntil,
+		acceptance: await acceptanceOf(quote),
+		clientMessage: quote.clientMessage,
+		respondedAt: quote.respondedAt?.toISOString() ?? null
 	};
+}
+
+async function acceptanceOf(quote: Quote): Promise<QuoteDetail['acceptance']> {
+	if (!quote.acceptedAt || !quote.acceptedById) return null;
+	const by = await User.findByPk(quote.acceptedById, { attributes: ['name'] });
+	return { byName: by?.name ?? 'someone', at: quote.acceptedAt.toISOString(), terms: (quote.acceptedTerms ?? '').split('\n').filter(Boolean) };
 }

@@ -15,6 +15,12 @@ export interface Settings {
 	cancellationFullRefundDays: number;
 	/** Days between electrical safety tests for models without their own interval. */
 	testIntervalDays: number;
+	quoteValidityDays: number;
+	companyAddress: string | null;
+	companyTaxNumber: string | null;
+	companyContact: string | null;
+	salesDeskEmail: string | null;
+	logoFile: string | null;
 }
 
 // Used until an admin saves settings (a fresh install before seeding).
@@ -28,7 +34,13 @@ const DEFAULTS: Settings = {
 	distanceUnit: 'm',
 	paymentTermsDays: 14,
 	cancellationFullRefundDays: 28,
-	testIntervalDays: 365
+	testIntervalDays: 365,
+	quoteValidityDays: 30,
+	companyAddress: null,
+	companyTaxNumber: null,
+	companyContact: null,
+	salesDeskEmail: null,
+	logoFile: null
 };
 
 export function getSettings(): Promise<Settings> {
@@ -43,8 +55,16 @@ async function loadSettings(): Promise<Settings> {
 }
 
 export async function updateSettings(input: SettingsInput): Promise<Settings> {
-	const { taxRatePct, depositPct, ...rest } = input;
-	const values = { ...rest, taxRateBp: Math.round(taxRatePct * 100), depositBp: Math.round(depositPct * 100) };
+	const { taxRatePct, depositPct, companyAddress, companyTaxNumber, companyContact, salesDeskEmail, ...rest } = input;
+	const values = {
+		...rest,
+		taxRateBp: Math.round(taxRatePct * 100),
+		depositBp: Math.round(depositPct * 100),
+		companyAddress: companyAddress || null,
+		companyTaxNumber: companyTaxNumber || null,
+		companyContact: companyContact || null,
+		salesDeskEmail: salesDeskEmail || null
+	};
 	await CompanySettings.upsert({ id: 1, ...values });
 	invalidate('settings');
 	return getSettings();
@@ -61,6 +81,25 @@ export function priceSettingsOf(settings: Settings): PriceSettings {
 
 /** The form shows percentages; the database keeps basis points. */
 export function settingsForForm(settings: Settings): SettingsInput {
-	const { taxRateBp, depositBp, ...rest } = settings;
-	return { ...rest, taxRatePct: taxRateBp / 100, depositPct: depositBp / 100 };
+	const { taxRateBp, depositBp, logoFile: _logo, companyAddress, companyTaxNumber, companyContact, salesDeskEmail, ...rest } = settings;
+	return {
+		...rest,
+		taxRatePct: taxRateBp / 100,
+		depositPct: depositBp / 100,
+		companyAddress: companyAddress ?? '',
+		companyTaxNumber: companyTaxNumber ?? '',
+		companyContact: companyContact ?? '',
+		salesDeskEmail: salesDeskEmail ?? ''
+	};
+}
+
+/** Stores the logo file name after the upload was checked and written (see company-logo.ts). */
+export async function setLogoFile(logoFile: string | null): Promise<void> {
+	const current = await getSettings();
+	await CompanySettings.upsert({ id: 1, ...settingsRow(current), logoFile });
+	invalidate('settings');
+}
+
+function settingsRow(settings: Settings) {
+	return { ...settings };
 }

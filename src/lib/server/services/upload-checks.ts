@@ -3,10 +3,14 @@
  * word), and whether it may be stored as the given kind of attachment.
  */
 export type AttachmentKind = 'spec-sheet' | 'photo';
+/** Every kind of upload the app takes: model attachments and the company logo. */
+export type UploadKind = AttachmentKind | 'logo';
 
-export const UPLOAD_LIMITS: Record<AttachmentKind, { maxBytes: number; types: readonly string[]; label: string }> = {
+export const UPLOAD_LIMITS: Record<UploadKind, { maxBytes: number; types: readonly string[]; label: string }> = {
 	'spec-sheet': { maxBytes: 10 * 1024 * 1024, types: ['application/pdf'], label: 'a PDF of at most 10 MB' },
-	photo: { maxBytes: 5 * 1024 * 1024, types: ['image/jpeg', 'image/png', 'image/webp'], label: 'a JPEG, PNG or WebP of at most 5 MB' }
+	photo: { maxBytes: 5 * 1024 * 1024, types: ['image/jpeg', 'image/png', 'image/webp'], label: 'a JPEG, PNG or WebP of at most 5 MB' },
+	// The quote document's PDF library draws PNG and JPEG only.
+	logo: { maxBytes: 1024 * 1024, types: ['image/jpeg', 'image/png'], label: 'a PNG or JPEG of at most 1 MB' }
 };
 
 const EXTENSIONS: Record<string, string> = {
@@ -35,7 +39,7 @@ export function extensionFor(mimeType: string): string {
 }
 
 /** The reason a file is refused, or null when it may be stored. */
-export function uploadProblem(kind: AttachmentKind, bytes: Uint8Array): string | null {
+export function uploadProblem(kind: UploadKind, bytes: Uint8Array): string | null {
 	const limit = UPLOAD_LIMITS[kind];
 	if (bytes.length === 0) return 'The file is empty.';
 	if (bytes.length > limit.maxBytes) return `The file is too large: upload ${limit.label}.`;

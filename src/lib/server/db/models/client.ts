@@ -14,6 +14,9 @@ export class Client extends Model<InferAttributes<Client>, InferCreationAttribut
 	declare contactName: string;
 	declare email: string;
 	declare phone: CreationOptional<string | null>;
+	declare billingAddress: CreationOptional<string | null>;
+	declare taxNumber: CreationOptional<string | null>;
+	declare notes: CreationOptional<string | null>;
 	declare stripeCustomerId: CreationOptional<string | null>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
@@ -26,6 +29,9 @@ export class Client extends Model<InferAttributes<Client>, InferCreationAttribut
 				contactName: { type: DataTypes.STRING(120), allowNull: false },
 				email: { type: DataTypes.STRING(254), allowNull: false },
 				phone: { type: DataTypes.STRING(40), allowNull: true },
+				billingAddress: { type: DataTypes.TEXT, allowNull: true },
+				taxNumber: { type: DataTypes.STRING(60), allowNull: true },
+				notes: { type: DataTypes.TEXT, allowNull: true },
 				stripeCustomerId: { type: DataTypes.STRING(64), allowNull: true },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE

@@ -26,6 +26,15 @@ export class CompanySettings extends Model<
 	declare cancellationFullRefundDays: number;
 	/** Default days between electrical safety tests, for models without their own interval. */
 	declare testIntervalDays: CreationOptional<number>;
+	/** Letterhead for the quote document. */
+	declare companyAddress: CreationOptional<string | null>;
+	declare companyTaxNumber: CreationOptional<string | null>;
+	declare companyContact: CreationOptional<string | null>;
+	/** Where the desk is told when a client accepts, declines, asks for a change or pays. */
+	declare salesDeskEmail: CreationOptional<string | null>;
+	declare quoteValidityDays: CreationOptional<number>;
+	/** The stored logo's file name under the upload directory (never under static/). */
+	declare logoFile: CreationOptional<string | null>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 
@@ -43,6 +52,12 @@ export class CompanySettings extends Model<
 				paymentTermsDays: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
 				cancellationFullRefundDays: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
 				testIntervalDays: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 365 },
+				companyAddress: { type: DataTypes.TEXT, allowNull: true },
+				companyTaxNumber: { type: DataTypes.STRING(60), allowNull: true },
+				companyContact: { type: DataTypes.STRING(200), allowNull: true },
+				salesDeskEmail: { type: DataTypes.STRING(254), allowNull: true },
+				quoteValidityDays: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 30 },
+				logoFile: { type: DataTypes.STRING(100), allowNull: true },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE
 			},

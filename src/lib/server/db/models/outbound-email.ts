@@ -18,6 +18,7 @@ export class OutboundEmail extends Model<InferAttributes<OutboundEmail>, InferCr
 	declare attempts: CreationOptional<number>;
 	declare lastError: CreationOptional<string | null>;
 	declare quoteId: CreationOptional<number | null>;
+	declare attachments: CreationOptional<{ filename: string; contentType: string; contentBase64: string }[] | null>;
 	declare sentAt: CreationOptional<Date | null>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
@@ -34,6 +35,7 @@ export class OutboundEmail extends Model<InferAttributes<OutboundEmail>, InferCr
 				attempts: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
 				lastError: { type: DataTypes.STRING(500), allowNull: true },
 				quoteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+				attachments: { type: DataTypes.JSON, allowNull: true },
 				sentAt: { type: DataTypes.DATE, allowNull: true },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE

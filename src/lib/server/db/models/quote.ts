@@ -6,7 +6,7 @@ import {
 	type InferCreationAttributes,
 	type Sequelize
 } from 'sequelize';
-import { QUOTE_STATUSES, type QuoteStatus } from '../../../quotes/states';
+import { CLIENT_RESPONSES, QUOTE_STATUSES, type ClientResponse, type QuoteStatus } from '../../../quotes/states';
 
 export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes<Quote>> {
 	declare id: CreationOptional<number>;
@@ -23,6 +23,15 @@ export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes
 	declare sentAt: CreationOptional<Date | null>;
 	declare acceptedAt: CreationOptional<Date | null>;
 	declare cancelledAt: CreationOptional<Date | null>;
+	/** The last day the sent quote may be accepted (stamped when sent, from the validity setting). */
+	declare validUntil: CreationOptional<string | null>;
+	declare acceptedById: CreationOptional<number | null>;
+	/** The terms exactly as the person accepting saw them. */
+	declare acceptedTerms: CreationOptional<string | null>;
+	/** The client's last answer other than acceptance: back with the desk until sent again. */
+	declare clientResponse: CreationOptional<ClientResponse | null>;
+	declare clientMessage: CreationOptional<string | null>;
+	declare respondedAt: CreationOptional<Date | null>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 
@@ -41,6 +50,12 @@ export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes
 				sentAt: { type: DataTypes.DATE, allowNull: true },
 				acceptedAt: { type: DataTypes.DATE, allowNull: true },
 				cancelledAt: { type: DataTypes.DATE, allowNull: true },
+				validUntil: { type: DataTypes.DATEONLY, allowNull: true },
+				acceptedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+				acceptedTerms: { type: DataTypes.TEXT, allowNull: true },
+				clientResponse: { type: DataTypes.ENUM(...CLIENT_RESPONSES), allowNull: true },
+				clientMessage: { type: DataTypes.TEXT, allowNull: true },
+				respondedAt: { type: DataTypes.DATE, allowNull: true },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE
 			},

@@ -20,6 +20,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
 	/** Set for `client` users: the organisation whose quotes and invoices they may see. */
 	declare clientId: ForeignKey<Client['id']> | null;
 	declare lastSignInAt: CreationOptional<Date | null>;
+	/** Null until the person chooses a password (a client account starts with an unusable one). */
+	declare passwordSetAt: CreationOptional<Date | null>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 
@@ -34,6 +36,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
 				active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
 				clientId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
 				lastSignInAt: { type: DataTypes.DATE, allowNull: true },
+				passwordSetAt: { type: DataTypes.DATE, allowNull: true },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE
 			},

@@ -1,28 +1,38 @@
 import { fail } from '@sveltejs/kit';
 import { canAny } from '$lib/permissions';
-import { allowedActions, type QuoteAction } from '$lib/quotes/states';
+import { allowedActions, isExpired, type QuoteAction } from '$lib/quotes/states';
+import type { QuoteActionInput } from '$lib/schemas/quotes';
 import { requireCapability } from '$lib/server/auth/guards';
 import { DomainError, orHttpError } from '$lib/server/services/errors';
+import { applyQuoteAction, termsFor } from '$lib/server/services/quote-actions';
 import { hireStateForClient } from '$lib/server/services/booking-life';
-import { applyQuoteAction } from '$lib/server/services/quote-actions';
 import { invoiceBalance } from '$lib/server/services/balance';
 import { getQuote } from '$lib/server/services/quotes';
+import { getSettings } from '$lib/server/services/settings';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireCapability(event, 'quotes:read');
 	event.depends('app:quotes');
-	const quote = await orHttpError(() => getQuote(Number(event.params.id), user));
+	const [quote, settings] = await Promise.all([orHttpError(() => getQuote(Number(event.params.id), user)), getSettings()]);
+	const expired = quote.status === 'sent' && isExpired(quote.validUntil, new Date().toISOString().slice(0, 10));
 	// getQuote already refused a client another organisation's quote, so the hire's state is theirs.
 	const hire = canAny(user.role, 'bookings:read', 'bookings:read-own') ? await hireStateForClient(quote.id) : null;
-	return { quote, actions: allowedActions(quote.status), hire };
+	return { quote, actions: allowedActions(quote.status), terms: termsFor(quote, settings), expired, hire };
 };
+
+/** The form's extra fields: the ticked terms box and the client's message. */
+async function formInput(event: RequestEvent, action: QuoteAction): Promise<QuoteActionInput> {
+	const form = await event.request.formData();
+	const message = String(form.get('message') ?? '').trim().slice(0, 4000);
+	return { action, acceptTerms: form.get('acceptTerms') === 'on', ...(message ? { message } : {}) };
+}
 
 function act(action: QuoteAction) {
 	return async (event: RequestEvent) => {
 		const user = requireCapability(event, 'quotes:act');
 		try {
-			const outcome = await applyQuoteAction(Number(event.params.id), action, user);
+			const outcome = await applyQuoteAction(Number(event.params.id), await formInput(event, action), user);
 			return { done: action, mailSent: outcome.mailSent ?? null };
 		} catch (err) {
 			if (err instanceof DomainError) return fail(err.status, { actionError: err.message });
@@ -34,6 +44,8 @@ function act(action: QuoteAction) {
 export const actions: Actions = {
 	send: act('send'),
 	accept: act('accept'),
+	decline: act('decline'),
+	requestChange: act('request-change'),
 	cancel: act('cancel'),
 	close: act('close'),
 	balance: async (event) => {

@@ -6,9 +6,12 @@ import { orHttpError } from '$lib/server/services/errors';
 import { applyQuoteAction } from '$lib/server/services/quote-actions';
 import type { RequestHandler } from './$types';
 
-/** { action: send | accept | cancel | close }; an illegal move for the quote's state is 409. */
+/**
+ * { action: send | accept | decline | request-change | cancel | close, acceptTerms?, message? };
+ * a client accepting sends acceptTerms: true. An illegal move for the quote's state is 409.
+ */
 export const POST: RequestHandler = async (event) => {
 	const user = requireCapability(event, 'quotes:act');
-	const { action } = await parseJsonBody(event.request, quoteActionSchema);
-	return json(await orHttpError(() => applyQuoteAction(Number(event.params.id), action, user)));
+	const input = await parseJsonBody(event.request, quoteActionSchema);
+	return json(await orHttpError(() => applyQuoteAction(Number(event.params.id), input, user)));
 };
