@@ -66,13 +66,14 @@ interface CheckedProgramme {
 }
 
 const CHECKED = new WeakMap<object, CheckedProgramme>();
+/** Property keys of the bands as strings, so a lookup converts no number ("31.5") on the hot path. */
+const BAND_KEYS = NOMINAL_BAND_CENTRES_HZ.map(String);
 
 function unchanged(entry: CheckedProgramme, programme: Programme): boolean {
 	if (entry.bandsRef !== programme.bandsDb || entry.crestFactorDb !== programme.crestFactorDb)
 		return false;
-	const bands = programme.bandsDb as Record<number, number | undefined>;
-	for (let i = 0; i < BAND_COUNT; i++)
-		if (bands[NOMINAL_BAND_CENTRES_HZ[i]] !== entry.snapshot[i]) return false;
+	const bands = programme.bandsDb as Record<string, number | undefined>;
+	for (let i = 0; i < BAND_COUNT; i++) if (bands[BAND_KEYS[i]] !== entry.snapshot[i]) return false;
 	return true;
 }
 
