@@ -82,8 +82,12 @@ export function drivePackage(
 	env.inverseC = air.inverseC;
 	env.freeField = site === null;
 	env.groundFactor = site === null ? null : site.groundFactor;
-	const requirement = requirementFor(request.programme, request.targetDb, request.weighting);
-	driven.requirement = requirement;
+	const requirement = requirementFor(
+		request.programme,
+		request.targetDb,
+		request.weighting,
+		driven.requirement
+	);
 	const { continuousDb, peakDb, drive } = driven;
 	if (driven.contributions.length < prepared.groups.length * BAND_COUNT)
 		driven.contributions = new Float64Array(prepared.groups.length * BAND_COUNT);

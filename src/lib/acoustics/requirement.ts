@@ -105,11 +105,12 @@ function checkedProgramme(programme: Programme): CheckedProgramme {
 	return entry;
 }
 
-/** Q_b for the target in its weighting (step 4). */
+/** Q_b for the target in its weighting (step 4), written into `out` (reused between calls). */
 export function requirementFor(
 	programme: Programme,
 	targetDb: number,
-	weighting: Weighting
+	weighting: Weighting,
+	out: Requirement = { bandIndices: [], requiredDb: [], crestFactorDb: 0 }
 ): Requirement {
 	const checked = checkedProgramme(programme);
 	const { bandIndices, relativeDb } = checked;
@@ -122,9 +123,12 @@ export function requirementFor(
 		sumDb = checked.weightedSumDb[weighting] = 10 * Math.log10(weightedEnergy);
 	}
 	const offsetDb = targetDb - sumDb;
-	const requiredDb: number[] = new Array(bandIndices.length);
+	const requiredDb = out.requiredDb;
+	requiredDb.length = bandIndices.length;
 	for (let n = 0; n < bandIndices.length; n++) requiredDb[n] = relativeDb[n] + offsetDb;
-	return { bandIndices, requiredDb, crestFactorDb: checked.crestFactorDb };
+	out.bandIndices = bandIndices;
+	out.crestFactorDb = checked.crestFactorDb;
+	return out;
 }
 
 /** Checks every field of a request that the model reads; returns nothing, throws a clear Error. */
