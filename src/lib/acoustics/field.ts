@@ -61,7 +61,8 @@ function termsAtHeight(h: number): HeightTerms {
  * (E1m · factor is its energy), for naming the group that binds. absorbAll (with a site) puts all
  * the air absorption inside the sums (r_ref = 0), which spares the caller one exponential per band
  * at the cost of range: beyond roughly 3000 dB of absorption (some 15–40 km at 8 kHz) a band's
- * energy underflows to silence.
+ * energy underflows to silence. onlyBand ≥ 0 (with a site) works out the losses of that band alone;
+ * the other bands' sums are then not meaningful.
  */
 export function fillEnergy(
 	groups: readonly PreparedGroup[],
@@ -72,7 +73,8 @@ export function fillEnergy(
 	continuousOut: Float64Array,
 	peakOut: Float64Array | null,
 	contributionsOut: Float64Array | null,
-	absorbAll = false
+	absorbAll = false,
+	onlyBand = -1
 ): number {
 	const site = !env.freeField;
 	const rRef = site && absorbAll ? 0 : dpM < 1 ? 1 : dpM;
@@ -120,7 +122,7 @@ export function fillEnergy(
 			let lastLossDb = 0;
 			let lastFactor = 1;
 			for (let b = 0; b < BAND_COUNT; b++) {
-				if (covers[b] === 0) continue;
+				if (covers[b] === 0 || (onlyBand >= 0 && b !== onlyBand)) continue;
 				const lossDb = alphas[b] * extra + attenuation[b] + receiverRegion[b];
 				if (lossDb !== lastLossDb) {
 					lastLossDb = lossDb;

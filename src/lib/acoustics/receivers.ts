@@ -50,7 +50,7 @@ export function drivenLevelAt(
 		);
 	}
 	// With a site, all absorption goes inside the sums and the drive is applied as linear gains.
-	fillEnergy(groups, driven.env, dpM, phiDeg, heightM, energy, null, null, true);
+	fillEnergy(groups, driven.env, dpM, phiDeg, heightM, energy, null, null, true, bandIndex);
 	if (bandIndex >= 0) return drive + 10 * Math.log10(energy[bandIndex]);
 	return gainedLevel(energy, gainsFor(driven, weighting));
 }
