@@ -123,7 +123,7 @@ export function fillDirectivity(d: PreparedDirectivity, phiDeg: number, out: Flo
 		return;
 	}
 	if (d.omni) {
-		out.fill(0);
+		for (let b = 0; b < BAND_COUNT; b++) out[b] = 0;
 		return;
 	}
 	const ratio = (2 * phiDeg) / d.dispersionHDeg;

@@ -8,11 +8,12 @@
  */
 import { airConstants } from './absorption';
 import { BAND_COUNT } from './bands';
-import { energyToLevels, fillEnergy, type Environment } from './field';
+import { dbToEnergy, energyToLevels, fillEnergy, type Environment } from './field';
 import type { PreparedPackage } from './groups';
 import { requirementFor, type Requirement } from './requirement';
 import type { CheckedSite } from './site';
-import type { QuoteRequest } from './types';
+import { BAND_WEIGHTINGS_DB } from './weighting';
+import type { QuoteRequest, Weighting } from './types';
 
 /**
  * The package at the position. Its arrays are module-level scratch, overwritten by the next call:
@@ -28,6 +29,9 @@ export interface DrivenPackage {
 	contributions: Float64Array;
 	/** drive_b = Q_b − contCap_b(position); NaN where the band is not driven. */
 	drive: Float64Array;
+	/** Per weighting, 10^((drive_b + W_b)/10) (0 where not driven), filled by gainsFor when first needed. */
+	gains: Record<Weighting, Float64Array>;
+	gainsReady: Record<Weighting, boolean>;
 }
 
 const driven: DrivenPackage = {
@@ -36,8 +40,35 @@ const driven: DrivenPackage = {
 	continuousDb: new Float64Array(BAND_COUNT),
 	peakDb: new Float64Array(BAND_COUNT),
 	contributions: new Float64Array(4 * BAND_COUNT),
-	drive: new Float64Array(BAND_COUNT)
+	drive: new Float64Array(BAND_COUNT),
+	gains: {
+		A: new Float64Array(BAND_COUNT),
+		C: new Float64Array(BAND_COUNT),
+		Z: new Float64Array(BAND_COUNT)
+	},
+	gainsReady: { A: false, C: false, Z: false }
 };
+
+/** Each weighting as a linear factor 10^(W_b/10) at the exact band frequencies. */
+const LINEAR_WEIGHTINGS: Record<Weighting, Float64Array> = {
+	A: BAND_WEIGHTINGS_DB.A.map(dbToEnergy),
+	C: BAND_WEIGHTINGS_DB.C.map(dbToEnergy),
+	Z: BAND_WEIGHTINGS_DB.Z.map(dbToEnergy)
+};
+
+/** 10^(drive_b/10), 0 where the band is not driven; filled with the drive. */
+const linearDrive = new Float64Array(BAND_COUNT);
+
+/** The linear drive gains in one weighting, 10^((drive_b + W_b)/10), computed once per drive. */
+export function gainsFor(d: DrivenPackage, weighting: Weighting): Float64Array {
+	const gains = d.gains[weighting];
+	if (!d.gainsReady[weighting]) {
+		const w = LINEAR_WEIGHTINGS[weighting];
+		for (let b = 0; b < BAND_COUNT; b++) gains[b] = linearDrive[b] * w[b];
+		d.gainsReady[weighting] = true;
+	}
+	return gains;
+}
 
 /** The caller has checked the request (and site); air and programme are checked here. */
 export function drivePackage(
@@ -51,8 +82,12 @@ export function drivePackage(
 	env.inverseC = air.inverseC;
 	env.freeField = site === null;
 	env.groundFactor = site === null ? null : site.groundFactor;
-	const requirement = requirementFor(request.programme, request.targetDb, request.weighting);
-	driven.requirement = requirement;
+	const requirement = requirementFor(
+		request.programme,
+		request.targetDb,
+		request.weighting,
+		driven.requirement
+	);
 	const { continuousDb, peakDb, drive } = driven;
 	if (driven.contributions.length < prepared.groups.length * BAND_COUNT)
 		driven.contributions = new Float64Array(prepared.groups.length * BAND_COUNT);
@@ -70,10 +105,14 @@ export function drivePackage(
 	);
 	energyToLevels(continuousDb, env.alphas, rRef);
 	energyToLevels(peakDb, env.alphas, rRef);
-	drive.fill(Number.NaN);
+	for (let b = 0; b < BAND_COUNT; b++) drive[b] = Number.NaN;
+	driven.gainsReady.A = driven.gainsReady.C = driven.gainsReady.Z = false;
+	for (let b = 0; b < BAND_COUNT; b++) linearDrive[b] = 0;
 	for (let n = 0; n < requirement.bandIndices.length; n++) {
 		const b = requirement.bandIndices[n];
-		if (continuousDb[b] !== -Infinity) drive[b] = requirement.requiredDb[n] - continuousDb[b];
+		if (continuousDb[b] === -Infinity) continue;
+		drive[b] = requirement.requiredDb[n] - continuousDb[b];
+		if (site !== null) linearDrive[b] = dbToEnergy(drive[b]);
 	}
 	return driven;
 }

@@ -36,17 +36,33 @@ export interface Environment {
 const NEG_DB = -Math.LN10 / 10;
 
 const attenuation = new Float64Array(BAND_COUNT);
+const factors = new Float64Array(BAND_COUNT);
 /** A_r of the point's own region: the same for every group, so worked out once per point. */
 const receiverRegion = new Float64Array(BAND_COUNT);
 const distance: DistanceTerms = { near: 0, far: 0 };
-let receiverTermsHeight = Number.NaN;
-const receiverTerms: HeightTerms = heightTerms(0);
+/** Height terms of the last few point heights (a site has few: the position, receivers, grid). */
+const HEIGHT_SLOTS = 4;
+const slotHeights = new Float64Array(HEIGHT_SLOTS).fill(Number.NaN);
+const slotTerms: HeightTerms[] = Array.from({ length: HEIGHT_SLOTS }, () => heightTerms(0));
+let nextSlot = 0;
+
+function termsAtHeight(h: number): HeightTerms {
+	for (let i = 0; i < HEIGHT_SLOTS; i++) if (slotHeights[i] === h) return slotTerms[i];
+	const slot = nextSlot;
+	nextSlot = (nextSlot + 1) % HEIGHT_SLOTS;
+	slotHeights[slot] = h;
+	return heightTerms(h, slotTerms[slot]);
+}
 
 /**
  * Fills continuousOut (and peakOut, contributionsOut when given) with the energy sums at a point
  * at horizontal distance dpM, off-axis angle phiDeg and height hM; returns r_ref. With a free-field
  * environment only dpM is used. contributionsOut[j·9 + b] receives group j's factor in band b
- * (E1m · factor is its energy), for naming the group that binds.
+ * (E1m · factor is its energy), for naming the group that binds. absorbAll (with a site) puts all
+ * the air absorption inside the sums (r_ref = 0), which spares the caller one exponential per band
+ * at the cost of range: beyond roughly 3000 dB of absorption (some 15–40 km at 8 kHz) a band's
+ * energy underflows to silence. onlyBand ≥ 0 (with a site) works out the losses of that band alone;
+ * the other bands' sums are then not meaningful.
  */
 export function fillEnergy(
 	groups: readonly PreparedGroup[],
@@ -56,54 +72,74 @@ export function fillEnergy(
 	hM: number,
 	continuousOut: Float64Array,
 	peakOut: Float64Array | null,
-	contributionsOut: Float64Array | null
+	contributionsOut: Float64Array | null,
+	absorbAll = false,
+	onlyBand = -1
 ): number {
-	const rRef = dpM < 1 ? 1 : dpM;
-	const alphas = env.alphas;
-	const G = env.groundFactor;
 	const site = !env.freeField;
+	const rRef = site && absorbAll ? 0 : dpM < 1 ? 1 : dpM;
+	const alphas = env.alphas;
+	const inverseC = env.inverseC;
+	const G = env.groundFactor;
 	const ground = site && G !== null;
+	// A_r of the point's own region, or zeros when there is no ground term.
+	for (let b = 0; b < BAND_COUNT; b++) receiverRegion[b] = 0;
 	if (ground) {
 		distanceTerms(dpM, distance);
-		if (hM !== receiverTermsHeight) {
-			heightTerms(hM, receiverTerms);
-			receiverTermsHeight = hM;
-		}
-		receiverRegion.fill(0);
-		addRegion(receiverTerms, distance, G, receiverRegion);
+		addRegion(termsAtHeight(hM), distance, G as number, receiverRegion);
 	}
-	continuousOut.fill(0);
-	if (peakOut !== null) peakOut.fill(0);
+	for (let b = 0; b < BAND_COUNT; b++) continuousOut[b] = 0;
+	if (peakOut !== null) for (let b = 0; b < BAND_COUNT; b++) peakOut[b] = 0;
 	for (let j = 0; j < groups.length; j++) {
 		const g = groups[j];
+		const covers = g.covers;
 		let r = rRef;
 		if (site) {
 			const dh = hM - g.heightM;
 			r = Math.sqrt(dpM * dpM + dh * dh);
 			if (r < 1) r = 1;
+		}
+		// Spreading: 1/r², or 1/(d_t·r) inside a line array's transition.
+		const inverseSquare = 1 / (r * r);
+		if (g.isLineArray) {
+			const transitionTimesC = g.transitionTimesC;
+			for (let b = 0; b < BAND_COUNT; b++) {
+				const transitionM = transitionTimesC[b] * inverseC;
+				factors[b] = transitionM > 1 && r < transitionM ? 1 / (transitionM * r) : inverseSquare;
+			}
+		} else {
+			for (let b = 0; b < BAND_COUNT; b++) factors[b] = inverseSquare;
+		}
+		// Site losses: extra air absorption over r − r_ref, directivity and ground, in one exponential.
+		if (site) {
 			fillDirectivity(g.directivity, phiDeg, attenuation);
 			if (ground) {
-				for (let b = 0; b < BAND_COUNT; b++) attenuation[b] += receiverRegion[b];
-				addRegion(g.groundTerms, distance, G, attenuation);
-				addMiddleRegion(g.heightM + hM, dpM, G, attenuation);
+				addRegion(g.groundTerms, distance, G as number, attenuation);
+				addMiddleRegion(g.heightM + hM, dpM, G as number, attenuation);
+			}
+			const extra = r - rRef;
+			// Neighbouring bands often share a loss (equal ground rows, the rear limit): reuse the factor.
+			let lastLossDb = 0;
+			let lastFactor = 1;
+			for (let b = 0; b < BAND_COUNT; b++) {
+				if (covers[b] === 0 || (onlyBand >= 0 && b !== onlyBand)) continue;
+				const lossDb = alphas[b] * extra + attenuation[b] + receiverRegion[b];
+				if (lossDb !== lastLossDb) {
+					lastLossDb = lossDb;
+					lastFactor = Math.exp(lossDb * NEG_DB);
+				}
+				factors[b] *= lastFactor;
 			}
 		}
-		const extra = r - rRef;
-		const inverseSquare = 1 / (r * r);
-		const covers = g.covers;
-		for (let b = 0; b < BAND_COUNT; b++) {
-			if (covers[b] === 0) continue;
-			let factor = inverseSquare;
-			if (g.isLineArray) {
-				const transitionM = g.transitionTimesC[b] * env.inverseC;
-				if (transitionM > 1 && r < transitionM) factor = 1 / (transitionM * r);
-			}
-			const lossDb = site ? alphas[b] * extra + attenuation[b] : 0;
-			if (lossDb !== 0) factor *= Math.exp(lossDb * NEG_DB);
-			continuousOut[b] += g.continuousEnergyAt1m[b] * factor;
-			if (peakOut !== null) peakOut[b] += g.peakEnergyAt1m[b] * factor;
-			if (contributionsOut !== null) contributionsOut[j * BAND_COUNT + b] = factor;
+		// Energy at 1 m is 0 in bands the group does not cover, so these sums need no test.
+		const continuousAt1m = g.continuousEnergyAt1m;
+		for (let b = 0; b < BAND_COUNT; b++) continuousOut[b] += continuousAt1m[b] * factors[b];
+		if (peakOut !== null) {
+			const peakAt1m = g.peakEnergyAt1m;
+			for (let b = 0; b < BAND_COUNT; b++) peakOut[b] += peakAt1m[b] * factors[b];
 		}
+		if (contributionsOut !== null)
+			for (let b = 0; b < BAND_COUNT; b++) contributionsOut[j * BAND_COUNT + b] = factors[b];
 	}
 	return rRef;
 }
@@ -111,6 +147,18 @@ export function fillEnergy(
 /** Band levels from fillEnergy's sums, in place: 10·lg E_b − α_b·r_ref (−Infinity where E_b = 0). */
 export function energyToLevels(energy: Float64Array, alphas: Float64Array, rRef: number): void {
 	for (let b = 0; b < BAND_COUNT; b++) energy[b] = 10 * Math.log10(energy[b]) - alphas[b] * rRef;
+}
+
+/** Σ_b E_b · gain_b in dB: the driven level when the gains already hold 10^((drive_b + W_b)/10). */
+export function gainedLevel(energy: Float64Array, gains: Float64Array): number {
+	let total = 0;
+	for (let b = 0; b < BAND_COUNT; b++) total += energy[b] * gains[b];
+	return 10 * Math.log10(total);
+}
+
+/** 10^(x/10) */
+export function dbToEnergy(db: number): number {
+	return Math.exp(db * -NEG_DB);
 }
 
 /**

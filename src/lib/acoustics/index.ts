@@ -77,6 +77,12 @@
  *   model pool channels; a channel drives cabinets of one stack (see amplifiers.ts).
  * - A package is prepared once and cached by object identity (and by the identity of its groups
  *   list and each group): a group edited in place must be replaced by a new object to be seen.
+ *   A programme is checked once per object and kept while its nine band values and crest factor
+ *   are unchanged (a key that is not a band, added after the first evaluation, is not noticed).
+ * - With a site, receiver and grid levels carry all their air absorption inside the energy sums
+ *   (faster); beyond roughly 3000 dB of absorption (some 15–40 km at 8 kHz) such a band underflows
+ *   to silence, so a receiver that far predicts −Infinity (margin +Infinity) in those bands. The
+ *   position's capability keeps the full range.
  * - Thrown AcousticsInputError (plain Error subclass) for: load below amplifier minimum, line-array
  *   element without heightM, non-positive/non-finite distances, unknown weighting or kind, programme
  *   with no bands or a non-octave band, negative crest factor or margin, humidity outside 0–100 %,

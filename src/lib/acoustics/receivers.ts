@@ -3,8 +3,8 @@
  * receiver, grid points; then `limits`, `outcome` and the ranking of outcomes.
  */
 import { BAND_COUNT, bandIndexOf } from './bands';
-import type { DrivenPackage } from './drive';
-import { drivenLevel, fillEnergy } from './field';
+import { gainsFor, type DrivenPackage } from './drive';
+import { drivenLevel, fillEnergy, gainedLevel } from './field';
 import { offAxisDeg } from './geometry';
 import type { PreparedGroup } from './groups';
 import { DEFAULT_LISTENING_HEIGHT_M, type CheckedSite } from './site';
@@ -20,7 +20,6 @@ import {
 } from './types';
 
 const energy = new Float64Array(BAND_COUNT);
-const ONLY_BAND = new Float64Array(BAND_COUNT);
 
 /**
  * The driven continuous level at a point, in `weighting` — or, with `bandIndex` ≥ 0, that band's
@@ -36,8 +35,12 @@ export function drivenLevelAt(
 	weighting: Weighting,
 	bandIndex = -1
 ): number | null {
-	const rRef = fillEnergy(groups, driven.env, dpM, phiDeg, heightM, energy, null, null);
-	if (bandIndex < 0)
+	const drive = bandIndex < 0 ? 0 : driven.drive[bandIndex];
+	if (drive !== drive) return null; // NaN: the programme lacks the band or no group covers it
+	if (driven.env.freeField) {
+		const rRef = fillEnergy(groups, driven.env, dpM, phiDeg, heightM, energy, null, null);
+		if (bandIndex >= 0)
+			return drive + 10 * Math.log10(energy[bandIndex]) - driven.env.alphas[bandIndex] * rRef;
 		return drivenLevel(
 			energy,
 			driven.drive,
@@ -45,11 +48,11 @@ export function drivenLevelAt(
 			driven.env.alphas,
 			rRef
 		);
-	const drive = driven.drive[bandIndex];
-	if (drive !== drive) return null; // NaN: the programme lacks the band or no group covers it
-	ONLY_BAND.fill(Number.NaN);
-	ONLY_BAND[bandIndex] = drive;
-	return drivenLevel(energy, ONLY_BAND, BAND_WEIGHTINGS_DB.Z, driven.env.alphas, rRef);
+	}
+	// With a site, all absorption goes inside the sums and the drive is applied as linear gains.
+	fillEnergy(groups, driven.env, dpM, phiDeg, heightM, energy, null, null, true, bandIndex);
+	if (bandIndex >= 0) return drive + 10 * Math.log10(energy[bandIndex]);
+	return gainedLevel(energy, gainsFor(driven, weighting));
 }
 
 /** Step 8. Without a site: free field on axis at D. With one: D on the aim bearing, 1.5 m high, plus the allowance. */

@@ -66,13 +66,14 @@ interface CheckedProgramme {
 }
 
 const CHECKED = new WeakMap<object, CheckedProgramme>();
+/** Property keys of the bands as strings, so a lookup converts no number ("31.5") on the hot path. */
+const BAND_KEYS = NOMINAL_BAND_CENTRES_HZ.map(String);
 
 function unchanged(entry: CheckedProgramme, programme: Programme): boolean {
 	if (entry.bandsRef !== programme.bandsDb || entry.crestFactorDb !== programme.crestFactorDb)
 		return false;
-	const bands = programme.bandsDb as Record<number, number | undefined>;
-	for (let i = 0; i < BAND_COUNT; i++)
-		if (bands[NOMINAL_BAND_CENTRES_HZ[i]] !== entry.snapshot[i]) return false;
+	const bands = programme.bandsDb as Record<string, number | undefined>;
+	for (let i = 0; i < BAND_COUNT; i++) if (bands[BAND_KEYS[i]] !== entry.snapshot[i]) return false;
 	return true;
 }
 
@@ -104,11 +105,12 @@ function checkedProgramme(programme: Programme): CheckedProgramme {
 	return entry;
 }
 
-/** Q_b for the target in its weighting (step 4). */
+/** Q_b for the target in its weighting (step 4), written into `out` (reused between calls). */
 export function requirementFor(
 	programme: Programme,
 	targetDb: number,
-	weighting: Weighting
+	weighting: Weighting,
+	out: Requirement = { bandIndices: [], requiredDb: [], crestFactorDb: 0 }
 ): Requirement {
 	const checked = checkedProgramme(programme);
 	const { bandIndices, relativeDb } = checked;
@@ -121,9 +123,12 @@ export function requirementFor(
 		sumDb = checked.weightedSumDb[weighting] = 10 * Math.log10(weightedEnergy);
 	}
 	const offsetDb = targetDb - sumDb;
-	const requiredDb: number[] = new Array(bandIndices.length);
+	const requiredDb = out.requiredDb;
+	requiredDb.length = bandIndices.length;
 	for (let n = 0; n < bandIndices.length; n++) requiredDb[n] = relativeDb[n] + offsetDb;
-	return { bandIndices, requiredDb, crestFactorDb: checked.crestFactorDb };
+	out.bandIndices = bandIndices;
+	out.crestFactorDb = checked.crestFactorDb;
+	return out;
 }
 
 /** Checks every field of a request that the model reads; returns nothing, throws a clear Error. */

@@ -89,3 +89,15 @@ describe('choices where the contract is silent (index.ts)', () => {
 		);
 	});
 });
+
+describe('range of receiver predictions on a site', () => {
+	it('8 kHz at 60 km (ISO 9613-1: over 4000 dB of absorption) underflows to silence: −Infinity, margin +Infinity, limits ok', () => {
+		const programme = { bandsDb: { 8000: 0 }, crestFactorDb: 6 };
+		const far = receiver({ name: 'Far', x: 0, y: 60_000 });
+		const r = one(group(), { programme, site: site({ receivers: [far] }) });
+		expect(r.receivers[0].predictedDb).toBe(-Infinity);
+		expect(r.receivers[0].marginDb).toBe(Infinity);
+		expect(r.limits.ok).toBe(true);
+		expect(Number.isFinite(r.bands[0].capabilityDb)).toBe(true);
+	});
+});

@@ -52,7 +52,7 @@ export function checkSite(site: Site): CheckedSite {
 			);
 	}
 	if (!Array.isArray(site.receivers)) fail('Site receivers must be a list (it may be empty).');
-	site.receivers.forEach(checkReceiver);
+	for (let i = 0; i < site.receivers.length; i++) checkReceiver(site.receivers[i], i);
 	return { aimDeg, groundFactor, positionHeightM, allowanceDb, receivers: site.receivers };
 }
 
