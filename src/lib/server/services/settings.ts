@@ -1,6 +1,7 @@
 import type { SettingsInput } from '$lib/schemas/programmes';
 import type { PriceSettings } from '$lib/quotes/pricing';
-import { cached, invalidate } from '../cache';
+import { cached } from '../cache';
+import { bumpStamp } from '../cache-stamps';
 import { CompanySettings } from '../db/models';
 
 export interface Settings {
@@ -42,8 +43,10 @@ async function loadSettings(): Promise<Settings> {
 export async function updateSettings(input: SettingsInput): Promise<Settings> {
 	const { taxRatePct, depositPct, ...rest } = input;
 	const values = { ...rest, taxRateBp: Math.round(taxRatePct * 100), depositBp: Math.round(depositPct * 100) };
-	await CompanySettings.upsert({ id: 1, ...values });
-	invalidate('settings');
+	await CompanySettings.sequelize!.transaction(async (transaction) => {
+		await CompanySettings.upsert({ id: 1, ...values }, { transaction });
+		await bumpStamp('settings', transaction);
+	});
 	return getSettings();
 }
 

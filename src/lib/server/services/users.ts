@@ -89,8 +89,10 @@ export async function updateUser(actorId: number, id: number, changes: UserUpdat
 			clientId: ['Choose a client']
 		});
 	}
-	await user.update({ ...changes, clientId });
-	userChanged();
+	await User.sequelize!.transaction(async (transaction) => {
+		await user.update({ ...changes, clientId }, { transaction });
+		await userChanged(transaction);
+	});
 	await user.reload({ include: [{ model: Client, as: 'client' }] });
 	return toRow(user);
 }
