@@ -19,8 +19,8 @@ export async function overviewFor(user: SessionUser): Promise<Overview> {
 	const seesQuotes = user.role !== 'warehouse';
 	const seesStock = user.role !== 'client';
 	const [quotes, bookings, inRepair, flagged] = await Promise.all([
-		seesQuotes ? listQuotes(user) : Promise.resolve([]),
-		seesStock ? listBookings(today) : Promise.resolve([]),
+		seesQuotes ? listQuotes(user, { limit: 8 }) : Promise.resolve([]),
+		seesStock ? listBookings(today, { until: inAWeek }) : Promise.resolve([]),
 		seesStock ? StockUnit.count({ where: { status: 'in-repair' } }) : Promise.resolve(null),
 		user.role === 'sales' || user.role === 'admin'
 			? Quote.findAll({ where: { [Op.or]: [{ needsRecheck: true }, { bookingIssue: { [Op.ne]: null } }], status: { [Op.notIn]: ['cancelled', 'closed'] } }, order: [['updatedAt', 'DESC']], limit: 10 })
@@ -33,8 +33,8 @@ export async function overviewFor(user: SessionUser): Promise<Overview> {
 			eventName: q.eventName,
 			why: q.bookingIssue ?? q.recheckReason ?? 'Needs a look'
 		})),
-		quotes: quotes.slice(0, 8),
-		goingOut: bookings.filter((b) => b.startDate <= inAWeek),
+		quotes,
+		goingOut: bookings,
 		unitsInRepair: inRepair
 	};
 }

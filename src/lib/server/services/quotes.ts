@@ -153,8 +153,8 @@ function summaryOf(quote: Quote & { client?: Client; versions?: QuoteVersion[] }
  * with the few figures the list shows read inside MariaDB: loading every version's whole evaluation
  * to show its package name cost 3.6 s at 5,000 hires.
  */
-export async function listQuotes(actor: SessionUser): Promise<QuoteSummary[]> {
-	const clientId = visibleTo(actor).clientId;
+export async function listQuotes(actor: SessionUser, options: QuoteListOptions = {}): Promise<QuoteSummary[]> {
+	const { where, replacements } = listFilter(actor, options.search);
 	const rows = await Quote.sequelize!.query<QuoteListRow>(
 		`SELECT q.id, q.eventName, q.status, q.clientId, c.name AS clientName, v.startDate, v.endDate,
 		        JSON_VALUE(v.evaluation, '$.packageName') AS packageName, JSON_VALUE(v.evaluation, '$.verdict') AS verdict,
@@ -163,9 +163,10 @@ export async function listQuotes(actor: SessionUser): Promise<QuoteSummary[]> {
 		   FROM quotes q
 		   JOIN clients c ON c.id = q.clientId
 		   JOIN quote_versions v ON v.quoteId = q.id AND v.version = q.currentVersion
-		  ${clientId === undefined ? '' : 'WHERE q.clientId = :clientId'}
-		  ORDER BY q.updatedAt DESC, q.id DESC`,
-		{ type: QueryTypes.SELECT, replacements: { clientId } }
+		  ${where}
+		  ORDER BY q.updatedAt DESC, q.id DESC
+		  ${options.limit ? 'LIMIT :limit' : ''}`,
+		{ type: QueryTypes.SELECT, replacements: { ...replacements, limit: options.limit ?? null } }
 	);
 	return rows.map((r) => ({
 		id: r.id,
@@ -183,6 +184,37 @@ export async function listQuotes(actor: SessionUser): Promise<QuoteSummary[]> {
 		needsRecheck: Boolean(r.needsRecheck),
 		updatedAt: new Date(r.updatedAt).toISOString()
 	}));
+}
+
+export interface QuoteListOptions {
+	/** Words in the event, the client's name or the reference (Q-00042). */
+	search?: string;
+	/** The newest this many; a list page shows a window, never every quote of a busy year. */
+	limit?: number;
+}
+
+/** How many quotes the person may see (matching the search, if any). */
+export async function countQuotes(actor: SessionUser, search?: string): Promise<number> {
+	const { where, replacements } = listFilter(actor, search);
+	const [row] = await Quote.sequelize!.query<{ n: number | string }>(
+		`SELECT COUNT(*) AS n FROM quotes q JOIN clients c ON c.id = q.clientId ${where}`,
+		{ type: QueryTypes.SELECT, replacements }
+	);
+	return Number(row.n);
+}
+
+function listFilter(actor: SessionUser, search?: string): { where: string; replacements: Record<string, unknown> } {
+	const clientId = visibleTo(actor).clientId;
+	const conditions: string[] = [];
+	if (clientId !== undefined) conditions.push('q.clientId = :clientId');
+	const words = (search ?? '').trim().slice(0, 100);
+	const id = /^q-?0*(\d+)$/i.exec(words)?.[1];
+	if (words) conditions.push(`(q.eventName LIKE :like OR c.name LIKE :like${id ? ' OR q.id = :id' : ''})`);
+	const like = `%${words.replace(/[\\%_]/g, (m) => `\\${m}`)}%`;
+	return {
+		where: conditions.length ? `WHERE ${conditions.join(' AND ')}` : '',
+		replacements: { clientId: clientId ?? null, like, id: id ? Number(id) : null }
+	};
 }
 
 interface QuoteListRow {
