@@ -6,11 +6,14 @@
  */
 import { fileURLToPath } from 'node:url';
 import { runAcousticsBench } from './acoustics.bench';
-import { httpRows, LOAD, measureHttp } from './http-suite';
+import { catalogueRows, measureCatalogues, type CatalogueResult } from './catalogue-suite';
+import { clusterRows, measureCluster, stopCluster } from './cluster-load';
+import { EVALUATION_BODY, httpRows, LOAD, measureHttp } from './http-suite';
 import type { LoadResult } from './http-load';
 import { pageWeight, type PageWeight } from './page-weight';
 import { stopAll } from './proc';
 import { formatTable, writeJson, type Row } from './report';
+import { measureStamps } from './stamps.bench';
 import { setUpWorld, tearDownWorld, type World } from './world';
 
 process.chdir(fileURLToPath(new URL('../..', import.meta.url)));
@@ -31,8 +34,11 @@ const PAGES: { path: string; who: string | null }[] = [
 ];
 
 let cleaning: Promise<void> | null = null;
+let benchEnvForCluster: NodeJS.ProcessEnv | null = null;
 function cleanUp(): Promise<void> {
-	cleaning ??= tearDownWorld().finally(stopAll);
+	cleaning ??= (benchEnvForCluster ? stopCluster(benchEnvForCluster) : Promise.resolve())
+		.then(tearDownWorld)
+		.finally(stopAll);
 	return cleaning;
 }
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
@@ -58,6 +64,9 @@ async function main(): Promise<void> {
 	log('setting up the bench world from nothing (MariaDB, migrate, seed, fakes, build, boot)…');
 	let world: World;
 	let load: LoadResult[];
+	let clusterLoad: LoadResult[];
+	let catalogues: CatalogueResult[];
+	let stamps: Row;
 	const pages: PageWeight[] = [];
 	try {
 		world = await setUpWorld();
@@ -80,6 +89,17 @@ async function main(): Promise<void> {
 					p.who ? cookies.get(p.who)! : ''
 				)
 			);
+		log('change stamps: one read per request');
+		stamps = await measureStamps(world.env);
+		benchEnvForCluster = world.env;
+		const body = JSON.stringify(EVALUATION_BODY);
+		clusterLoad = await measureCluster(world.env, cookies.get(SALES)!, body, log);
+		catalogues = await measureCatalogues(
+			world.env,
+			{ sales: cookies.get(SALES)!, warehouse: cookies.get(WAREHOUSE)! },
+			body,
+			log
+		);
 	} finally {
 		log('stopping the bench world');
 		await cleanUp();
@@ -102,6 +122,9 @@ async function main(): Promise<void> {
 			ok: acoustics.opsPerSec >= ACOUSTICS_TARGET
 		},
 		...httpRows(load, notes),
+		stamps,
+		...clusterRows(clusterLoad, load[0], notes),
+		...catalogueRows(catalogues, load[0], notes),
 		...pages.map((p) => ({
 			metric: `JS for ${p.path}${p.finalPath !== p.path ? ` (→ ${p.finalPath})` : ''} as ${p.role.split('@')[0]}, ${p.modules} modules`,
 			value: p.gzipKb,
@@ -135,6 +158,8 @@ async function main(): Promise<void> {
 		at: new Date().toISOString(),
 		rows,
 		load,
+		clusterLoad,
+		catalogues,
 		pages,
 		acoustics,
 		world: { ...world, env: undefined },
