@@ -35,9 +35,15 @@ start() {
 }
 
 stop_one() {
-	local pidfile="$RUN_DIR/app-$1.pid"
+	local pidfile="$RUN_DIR/app-$1.pid" pid
 	if [ -f "$pidfile" ]; then
-		kill "$(cat "$pidfile")" 2>/dev/null && echo "[app] process on port $1 stopped"
+		pid=$(cat "$pidfile")
+		if kill "$pid" 2>/dev/null; then
+			# adapter-node closes its connections (up to its 30 s timeout); then it must be gone.
+			for _ in $(seq 1 100); do kill -0 "$pid" 2>/dev/null || break; sleep 0.2; done
+			kill -KILL "$pid" 2>/dev/null && echo "[app] process on port $1 did not stop in 20 s; killed"
+			echo "[app] process on port $1 stopped"
+		fi
 		rm -f "$pidfile"
 	fi
 	return 0
