@@ -171,7 +171,9 @@ async function main(): Promise<void> {
 main().then(
 	() => process.exit(0),
 	async (err: unknown) => {
-		console.error('[bench] failed:', err instanceof Error ? err.message : err);
+		const cause = err instanceof Error && err.cause ? ` (${String((err.cause as Error).message ?? err.cause)})` : '';
+		console.error('[bench] failed:', err instanceof Error ? `${err.message}${cause}` : err);
+		if (err instanceof Error && err.stack) console.error(err.stack.split('\n').slice(0, 6).join('\n'));
 		await cleanUp();
 		process.exit(1);
 	}
