@@ -49,12 +49,18 @@ performance_schema=OFF
 innodb_buffer_pool_size=64M
 innodb_log_file_size=32M
 max_connections=200
+# Uploaded files (spec sheets up to 10 MB) are stored in the database: room for one in a packet.
+max_allowed_packet=64M
 character-set-server=utf8mb4
 collation-server=utf8mb4_unicode_ci
 log-error=$DB_DIR/error.log
 [client]
 socket=$SOCK
 user=root
+[mysql]
+max_allowed_packet=64M
+[mysqldump]
+max_allowed_packet=64M
 CNF
 }
 

@@ -5,7 +5,7 @@
  */
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
-import type { QueryInterface, Sequelize } from 'sequelize';
+import { QueryTypes, type QueryInterface, type Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import { createSequelize, databaseConfigFrom } from '../src/lib/server/db/connection';
 
@@ -38,7 +38,39 @@ function runner(sequelize: Sequelize, folder: 'migrations' | 'seeders') {
 	});
 }
 
-export async function migrate(sequelize: Sequelize, command: string): Promise<string[]> {
+const LOCK_NAME = 'throwline-migrate';
+const LOCK_WAIT_S = 60;
+
+/**
+ * Runs `work` while holding a MariaDB named lock, so app processes (or machines) starting together
+ * migrate and seed one after the other: the second finds the work done. The lock belongs to one
+ * connection, kept for the whole run by an otherwise empty transaction; umzug uses other connections.
+ */
+export async function underMigrationLock<T>(sequelize: Sequelize, work: () => Promise<T>): Promise<T> {
+	return sequelize.transaction(async (transaction) => {
+		const [{ got }] = await sequelize.query<{ got: number | null }>('SELECT GET_LOCK(:name, :wait) AS got', {
+			type: QueryTypes.SELECT,
+			replacements: { name: LOCK_NAME, wait: LOCK_WAIT_S },
+			transaction
+		});
+		if (Number(got) !== 1) throw new Error(`another process held the "${LOCK_NAME}" lock for ${LOCK_WAIT_S} s`);
+		try {
+			return await work();
+		} finally {
+			await sequelize.query('SELECT RELEASE_LOCK(:name)', {
+				type: QueryTypes.SELECT,
+				replacements: { name: LOCK_NAME },
+				transaction
+			});
+		}
+	});
+}
+
+export function migrate(sequelize: Sequelize, command: string): Promise<string[]> {
+	return underMigrationLock(sequelize, () => migrateUnlocked(sequelize, command));
+}
+
+async function migrateUnlocked(sequelize: Sequelize, command: string): Promise<string[]> {
 	switch (command) {
 		case 'up':
 			return (await runner(sequelize, 'migrations').up()).map((m) => m.name);

@@ -30,3 +30,5 @@ export UPLOAD_DIR=.data/test/uploads
 export RUN_DIR=.data/test/run
 export BUILD_DIR=.data/test/build
 export BODY_SIZE_LIMIT=11M
+# The cluster test world (scripts/test-cluster.sh): two app processes behind nginx on $PORT.
+export CLUSTER_APP_PORTS="$((3150 + o)) $((3151 + o))"

@@ -3,7 +3,8 @@
 # the built app on $ORIGIN. Used by `npm test`, and by hand to run one browser test file:
 #   bash scripts/test-world.sh up && . scripts/test-env.sh && npx vitest run --config tests/e2e/vitest.config.ts tests/e2e/x.e2e.ts
 #   bash scripts/test-world.sh down
-#   scripts/test-world.sh services | app | up | down
+#   scripts/test-world.sh services | build | app | up | down
+# (scripts/test-cluster.sh puts two app processes behind nginx on $ORIGIN instead of the one app.)
 set -euo pipefail
 cd "$(dirname "$0")/.."
 . scripts/test-env.sh
@@ -20,13 +21,17 @@ services() {
 	bash scripts/fakes.sh start
 }
 
-app() {
+build() {
 	# Builds share .svelte-kit/output: the lock keeps a concurrent npm start build from mixing in.
 	mkdir -p .data "$RUN_DIR"
 	if ! flock .data/build.lock node node_modules/vite/bin/vite.js build --logLevel warn >"$RUN_DIR/build.log" 2>&1; then
 		tail -40 "$RUN_DIR/build.log" >&2
 		return 1
 	fi
+}
+
+app() {
+	build
 	stop_app
 	setsid node "$BUILD_DIR" >"$RUN_DIR/app.log" 2>&1 </dev/null &
 	echo $! >"$RUN_DIR/app.pid"
@@ -46,6 +51,7 @@ stop_app() {
 }
 
 down() {
+	bash scripts/test-cluster.sh down >/dev/null
 	stop_app
 	bash scripts/fakes.sh stop >/dev/null
 	bash scripts/db.sh stop >/dev/null
@@ -53,6 +59,7 @@ down() {
 
 case "${1:-up}" in
 services) services ;;
+build) build ;;
 app) app ;;
 up) services && app ;;
 down) down ;;

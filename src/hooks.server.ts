@@ -7,10 +7,19 @@ import { guardPages } from './hooks/guard-pages';
 import { refuseReservedAction } from './hooks/reserved-action';
 import { securityHeaders } from './hooks/security-headers';
 import { startMailRetry } from '$lib/server/mail/retry';
+import { db } from '$lib/server/db';
 
-/** Once per server start: messages the SMTP server did not take are retried on a timer. */
+/**
+ * Once per server start: messages the SMTP server did not take are retried on a timer. On shutdown
+ * (adapter-node's event, after the server closed) the timer stops and the pool closes: a retry pass
+ * every few seconds would otherwise keep the pool, and so the process, alive after SIGTERM.
+ */
 export const init: ServerInit = () => {
-	startMailRetry();
+	const retry = startMailRetry();
+	process.once('sveltekit:shutdown', () => {
+		retry.stop();
+		void db().close();
+	});
 };
 
 export const handle = sequence(securityHeaders, databaseDown, refuseReservedAction, authHandle, attachUser, guardPages);

@@ -1,6 +1,7 @@
 import type { Handle } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
 import { cached } from '$lib/server/cache';
+import { syncStamps } from '$lib/server/cache-stamps';
 import { findActiveUser } from '$lib/server/users';
 import { unavailable } from './unavailable';
 
@@ -21,20 +22,23 @@ async function sessionUserId(event: Parameters<Handle>[0]['event']): Promise<num
 	});
 }
 
-/** Resolves the session cookie to the current user row, so role and active status are never stale. */
+/**
+ * Resolves the session cookie to the current user row, so role and active status are never stale,
+ * after bringing the cache up to date with the change stamps.
+ */
 export const attachUser: Handle = async ({ event, resolve }) => {
 	event.locals.user = null;
 	db(); // binds the models to the pool before any route uses them
 	if (PUBLIC_PATHS.includes(event.url.pathname)) return resolve(event);
 
-	const id = await sessionUserId(event);
-	if (id !== null) {
-		try {
-			event.locals.user = await findActiveUser(id);
-		} catch (err) {
-			console.error('[attach-user] database unavailable:', (err as Error).message);
-			return unavailable(event);
-		}
+	try {
+		// Other processes' writes (a deactivation, a price change) act on this request here.
+		await syncStamps();
+		const id = await sessionUserId(event);
+		if (id !== null) event.locals.user = await findActiveUser(id);
+	} catch (err) {
+		console.error('[attach-user] database unavailable:', (err as Error).message);
+		return unavailable(event);
 	}
 	return resolve(event);
 };

@@ -10,7 +10,7 @@ const P95_TARGET_MS = 100;
 const EVALUATIONS_RATIO_TARGET = 0.25;
 
 /** A realistic desk request (schema: src/lib/schemas/evaluation.ts); dates far ahead, so no clashes. */
-const EVALUATION_BODY = {
+export const EVALUATION_BODY = {
 	targetDb: 100,
 	weighting: 'A',
 	distance: 30,

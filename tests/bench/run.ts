@@ -9,11 +9,14 @@
 import { fileURLToPath } from 'node:url';
 import { acousticsRows, runAcousticsBench } from './acoustics.bench';
 import { runLevelMapBench } from './level-map.bench';
-import { httpRows, LOAD, measureHttp } from './http-suite';
+import { catalogueRows, measureCatalogues, type CatalogueResult } from './catalogue-suite';
+import { clusterRows, measureCluster, stopCluster } from './cluster-load';
+import { EVALUATION_BODY, httpRows, LOAD, measureHttp } from './http-suite';
 import type { LoadResult } from './http-load';
 import { pageWeight, type PageWeight } from './page-weight';
 import { stopAll } from './proc';
 import { formatTable, writeJson, type Row } from './report';
+import { measureStamps } from './stamps.bench';
 import { setUpWorld, tearDownWorld, type World } from './world';
 
 process.chdir(fileURLToPath(new URL('../..', import.meta.url)));
@@ -33,8 +36,11 @@ const PAGES: { path: string; who: string | null }[] = [
 ];
 
 let cleaning: Promise<void> | null = null;
+let benchEnvForCluster: NodeJS.ProcessEnv | null = null;
 function cleanUp(): Promise<void> {
-	cleaning ??= tearDownWorld().finally(stopAll);
+	cleaning ??= (benchEnvForCluster ? stopCluster(benchEnvForCluster) : Promise.resolve())
+		.then(tearDownWorld)
+		.finally(stopAll);
 	return cleaning;
 }
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
@@ -62,6 +68,9 @@ async function main(): Promise<void> {
 	log('setting up the bench world from nothing (MariaDB, migrate, seed, fakes, build, boot)…');
 	let world: World;
 	let load: LoadResult[];
+	let clusterLoad: LoadResult[];
+	let catalogues: CatalogueResult[];
+	let stamps: Row;
 	const pages: PageWeight[] = [];
 	try {
 		world = await setUpWorld();
@@ -84,6 +93,17 @@ async function main(): Promise<void> {
 					p.who ? cookies.get(p.who)! : ''
 				)
 			);
+		log('change stamps: one read per request');
+		stamps = await measureStamps(world.env);
+		benchEnvForCluster = world.env;
+		const body = JSON.stringify(EVALUATION_BODY);
+		clusterLoad = await measureCluster(world.env, cookies.get(SALES)!, body, log);
+		catalogues = await measureCatalogues(
+			world.env,
+			{ sales: cookies.get(SALES)!, warehouse: cookies.get(WAREHOUSE)! },
+			body,
+			log
+		);
 	} finally {
 		log('stopping the bench world');
 		await cleanUp();
@@ -107,6 +127,9 @@ async function main(): Promise<void> {
 			ok: m.opsPerSec >= 10
 		})),
 		...httpRows(load, notes),
+		stamps,
+		...clusterRows(clusterLoad, load[0], notes),
+		...catalogueRows(catalogues, load[0], notes),
 		...pages.map((p) => ({
 			metric: `JS for ${p.path}${p.finalPath !== p.path ? ` (→ ${p.finalPath})` : ''} as ${p.role.split('@')[0]}, ${p.modules} modules`,
 			value: p.gzipKb,
@@ -140,6 +163,8 @@ async function main(): Promise<void> {
 		at: new Date().toISOString(),
 		rows,
 		load,
+		clusterLoad,
+		catalogues,
 		pages,
 		acoustics,
 		world: { ...world, env: undefined },
@@ -166,7 +191,9 @@ function inProcessOnly(): void {
 (process.argv.includes('--in-process') ? Promise.resolve().then(inProcessOnly) : main()).then(
 	() => process.exit(0),
 	async (err: unknown) => {
-		console.error('[bench] failed:', err instanceof Error ? err.message : err);
+		const cause = err instanceof Error && err.cause ? ` (${String((err.cause as Error).message ?? err.cause)})` : '';
+		console.error('[bench] failed:', err instanceof Error ? `${err.message}${cause}` : err);
+		if (err instanceof Error && err.stack) console.error(err.stack.split('\n').slice(0, 6).join('\n'));
 		await cleanUp();
 		process.exit(1);
 	}

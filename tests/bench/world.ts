@@ -7,19 +7,22 @@ import { openSync, closeSync, mkdirSync, rmSync } from 'node:fs';
 import type { ChildProcess } from 'node:child_process';
 import { must, run, sleep, startDetached, stop } from './proc';
 
+/** Ports shift with TEST_PORT_OFFSET, as the test world's do, so checkouts can bench side by side. */
+const port = (base: number) => String(base + Number(process.env.TEST_PORT_OFFSET ?? 0));
+
 /** Differences from scripts/test-env.sh: only ports, database name and folders. */
 const BENCH_OVERRIDES: Record<string, string> = {
 	DB_DIR: '.data/bench/mariadb',
-	DATABASE_PORT: '3327',
+	DATABASE_PORT: port(3327),
 	DATABASE_NAME: 'throwline_bench',
-	PORT: '3200',
-	ORIGIN: 'http://127.0.0.1:3200',
+	PORT: port(3200),
+	ORIGIN: `http://127.0.0.1:${port(3200)}`,
 	RUN_DIR: '.data/bench/run',
 	BUILD_DIR: '.data/bench/build',
-	SMTP_PORT: '2726',
-	SMTP_HTTP_PORT: '2780',
-	STRIPE_API_PORT: '12411',
-	STRIPE_WEBHOOK_URL: 'http://127.0.0.1:3200/api/webhooks/stripe',
+	SMTP_PORT: port(2726),
+	SMTP_HTTP_PORT: port(2780),
+	STRIPE_API_PORT: port(12411),
+	STRIPE_WEBHOOK_URL: `http://127.0.0.1:${port(3200)}/api/webhooks/stripe`,
 	MAIL_DIR: '.data/bench/mail',
 	UPLOAD_DIR: '.data/bench/uploads'
 };

@@ -15,7 +15,7 @@
  * read it and close the connection; the client can then see a reset instead of the 413. That is
  * accepted only for bodies over a limit, and each request has its own connection (proof/raw-http.ts).
  */
-import { existsSync, readdirSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import path from 'node:path';
 import fc from 'fast-check';
 import type { z } from 'zod';
@@ -38,6 +38,8 @@ import {
 import { userCreateSchema, userUpdateSchema } from '../../src/lib/schemas/users';
 import { clientSchema, clientUpdateSchema } from '../../src/lib/schemas/clients';
 import { linkRequestSchema } from '../../src/lib/schemas/access';
+import { QueryTypes } from 'sequelize';
+import { useTestDatabase } from '../helpers/db';
 import { BASE_URL } from './browser';
 import { api } from './http';
 import { fieldsOf, hostileCsvBody, hostileJsonBody, type HostileBody } from './proof/hostile';
@@ -117,6 +119,16 @@ let sessions: Sessions;
 let fixtures: InventoryFixtures;
 let before: Snapshot;
 let tried = 0;
+const sequelize = useTestDatabase();
+
+/** Uploaded files live in the database (stored_files): their names, to see nothing was added. */
+async function storedFileNames(): Promise<string[]> {
+	const rows = await sequelize.query<{ name: string }>('SELECT name FROM stored_files ORDER BY name', {
+		type: QueryTypes.SELECT
+	});
+	return rows.map((r) => r.name);
+}
+
 const throwaways: { kind: 'loudspeaker' | 'attachment'; id: number }[] = [];
 
 beforeAll(async () => {
@@ -243,8 +255,7 @@ describe('hostile input', () => {
 	}, 300_000);
 
 	it('refuses hostile uploads and stores nothing', async () => {
-		const uploadDir = path.resolve(process.env.UPLOAD_DIR ?? '.data/test/uploads');
-		const filesBefore = existsSync(uploadDir) ? readdirSync(uploadDir).length : 0;
+		const filesBefore = await storedFileNames();
 		for (const model of ['loudspeakers', 'amplifiers'] as const) {
 			const id = model === 'loudspeakers' ? fixtures.speakerId : fixtures.ampId;
 			const listUrl = `/api/${model}/${id}/attachments`;
@@ -261,7 +272,7 @@ describe('hostile input', () => {
 			});
 			expect(await api(listUrl, { cookie: sessions.admin })).toEqual(listBefore);
 		}
-		expect(existsSync(uploadDir) ? readdirSync(uploadDir).length : 0).toBe(filesBefore);
+		expect(await storedFileNames()).toEqual(filesBefore);
 	}, 300_000);
 
 	it("answers a body over the server's own limit with 413 in the envelope", async () => {
@@ -312,7 +323,7 @@ describe('hostile input', () => {
 			expect(existsSync(path.resolve(uploadDir, escaped))).toBe(false);
 		}
 		expect(
-			readdirSync(uploadDir).filter((f) => !/^[0-9a-f-]{36}\.(pdf|jpg|png|webp)$/.test(f))
+			(await storedFileNames()).filter((f) => !/^[0-9a-f-]{36}\.(pdf|jpg|png|webp)$/.test(f))
 		).toEqual([]);
 	});
 });

@@ -1,8 +1,8 @@
 /**
  * A small in-process cache for data that changes rarely and is read on every evaluation (the
  * catalogue, settings, programme profiles). Entries live a few seconds at most and are dropped at
- * once by the writes that change them, so one app process never serves a stale spec after its own
- * edit; several processes would agree within the time-to-live.
+ * once by the writes that change them; with several processes, `cache-stamps.ts` drops the families
+ * another process changed at the start of each request.
  */
 const TTL_MS = 5000;
 

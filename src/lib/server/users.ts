@@ -1,5 +1,7 @@
 import type { Role } from '$lib/permissions';
-import { cached, invalidate } from './cache';
+import type { Transaction } from 'sequelize';
+import { cached } from './cache';
+import { bumpStamp } from './cache-stamps';
 import { User } from './db/models';
 
 export interface SessionUser {
@@ -12,14 +14,18 @@ export interface SessionUser {
 
 /**
  * The signed-in person as of now: a deactivated account or a changed role takes effect on the next
- * request (user changes call `userChanged`, which drops the briefly cached row).
+ * request on every process (user changes call `userChanged`, which bumps the users' change stamp).
  */
 export function findActiveUser(id: number): Promise<SessionUser | null> {
 	return cached(`user:${id}`, () => loadActiveUser(id));
 }
 
-export function userChanged(): void {
-	invalidate('user:');
+/**
+ * Call inside the transaction that changes a user (or right after a single-statement change):
+ * every process drops its cached rows.
+ */
+export function userChanged(transaction?: Transaction): Promise<void> {
+	return bumpStamp('users', transaction);
 }
 
 async function loadActiveUser(id: number): Promise<SessionUser | null> {

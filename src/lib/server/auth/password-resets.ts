@@ -47,7 +47,7 @@ export async function completePasswordReset(token: string, password: string): Pr
 		return true;
 	});
 	if (!done) return null;
-	userChanged();
+	await userChanged();
 	await endOtherSessions(found.user.id);
 	return { email: found.user.email };
 }

@@ -1,4 +1,6 @@
-import { Op, type Transaction } from 'sequelize';
+import { randomBytes } from 'node:crypto';
+import { hostname } from 'node:os';
+import { literal, Op, type Transaction } from 'sequelize';
 import { OutboundEmail } from '../db/models';
 import { mailFrom, mailTransport } from './transport';
 
@@ -37,8 +39,40 @@ export async function queueEmail(message: EmailMessage, transaction?: Transactio
 	);
 }
 
-/** Tries to hand one queued message to the SMTP server; records the outcome either way. */
+/** Names this process in the rows it claims (host, pid and a random tag, in case pids repeat). */
+const PROCESS_TAG = `${hostname()}:${process.pid}:${randomBytes(4).toString('hex')}`.slice(0, 100);
+
+/** A claim older than this belongs to a process that died mid-send (SMTP gives up after ~11 s). */
+export const STALE_CLAIM_MS = 120_000;
+
+/**
+ * Claims one row for this process with a single conditional UPDATE: of several processes trying at
+ * once, exactly one sees a changed row. Unsent rows and stale claims can be claimed.
+ */
+async function claim(id: number): Promise<boolean> {
+	const [changed] = await OutboundEmail.update(
+		{ status: 'sending', claimedAt: new Date(), claimedBy: PROCESS_TAG },
+		{
+			where: {
+				id,
+				attempts: { [Op.lt]: MAX_ATTEMPTS },
+				[Op.or]: [
+					{ status: { [Op.in]: ['pending', 'failed'] } },
+					{ status: 'sending', claimedAt: { [Op.lt]: new Date(Date.now() - STALE_CLAIM_MS) } }
+				]
+			}
+		}
+	);
+	return changed === 1;
+}
+
+/**
+ * Claims one queued message, hands it to the SMTP server and records the outcome. Answers false
+ * when the message did not leave, including when another process holds it or it was sent already.
+ */
 export async function deliver(email: OutboundEmail): Promise<boolean> {
+	if (!(await claim(email.id))) return false;
+	const mine = { where: { id: email.id, claimedBy: PROCESS_TAG } };
 	try {
 		await mailTransport().sendMail({
 			from: mailFrom(),
@@ -48,14 +82,21 @@ export async function deliver(email: OutboundEmail): Promise<boolean> {
 			html: email.htmlBody ?? undefined,
 			attachments: (email.attachments ?? []).map((a) => ({ filename: a.filename, contentType: a.contentType, content: Buffer.from(a.contentBase64, 'base64') }))
 		});
-		await email.update({ status: 'sent', attempts: email.attempts + 1, sentAt: new Date(), lastError: null });
+		await OutboundEmail.update(
+			{ status: 'sent', attempts: literal('attempts + 1'), sentAt: new Date(), lastError: null, claimedAt: null },
+			mine
+		);
 		return true;
 	} catch (err) {
-		await email.update({
-			status: 'failed',
-			attempts: email.attempts + 1,
-			lastError: String((err as Error).message).slice(0, 500)
-		});
+		await OutboundEmail.update(
+			{
+				status: 'failed',
+				attempts: literal('attempts + 1'),
+				lastError: String((err as Error).message).slice(0, 500),
+				claimedAt: null
+			},
+			mine
+		);
 		return false;
 	}
 }
@@ -72,7 +113,8 @@ const PENDING_GRACE_MS = 60_000;
 
 /**
  * Sends whatever is still waiting (called by the timer in `retry.ts`). While the SMTP server does
- * not answer, nothing is tried, so an outage never uses up a message's attempts.
+ * not answer, nothing is tried, so an outage never uses up a message's attempts. Each row is
+ * claimed before it is sent, so timers in several processes never send one message twice.
  */
 export async function retryQueuedEmails(limit = 20): Promise<{ sent: number; failed: number; serverDown: boolean }> {
 	const waiting = await OutboundEmail.findAll({
@@ -80,7 +122,8 @@ export async function retryQueuedEmails(limit = 20): Promise<{ sent: number; fai
 			attempts: { [Op.lt]: MAX_ATTEMPTS },
 			[Op.or]: [
 				{ status: 'failed' },
-				{ status: 'pending', createdAt: { [Op.lt]: new Date(Date.now() - PENDING_GRACE_MS) } }
+				{ status: 'pending', createdAt: { [Op.lt]: new Date(Date.now() - PENDING_GRACE_MS) } },
+				{ status: 'sending', claimedAt: { [Op.lt]: new Date(Date.now() - STALE_CLAIM_MS) } }
 			]
 		},
 		order: [['id', 'ASC']],

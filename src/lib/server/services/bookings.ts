@@ -8,7 +8,7 @@
 import { Op, Transaction } from 'sequelize';
 import { checkAvailability, type ModelKey, type Shortfall } from '$lib/quotes/availability';
 import { db, AmplifierModel, Booking, BookingLine, LoudspeakerModel, QuoteVersion } from '../db';
-import { BOOKINGS, invalidate } from '../cache';
+import { bumpStamp } from '../cache-stamps';
 import { reservationsOverlapping, unitsInService } from './catalogue';
 
 export type Reservation =
@@ -47,7 +47,6 @@ export async function reserveStockForQuote(quoteId: number, version: number, tra
 		return { ok: false, shortfalls: stock.shortfalls.map((s) => ({ ...s, name: names.get(s.model) ?? s.model })) };
 	}
 
-	transaction.afterCommit(() => invalidate(BOOKINGS));
 	const [booking] = await Booking.upsert(
 		{ quoteId, status: 'confirmed', startDate: quoted.startDate, endDate: quoted.endDate },
 		{ transaction }
@@ -61,11 +60,12 @@ export async function reserveStockForQuote(quoteId: number, version: number, tra
 		}),
 		{ transaction }
 	);
+	await bumpStamp('bookings', transaction);
 	return { ok: true, bookingId };
 }
 
 /** Frees the stock of a cancelled hire. */
 export async function releaseBooking(quoteId: number, transaction: Transaction): Promise<void> {
-	transaction.afterCommit(() => invalidate(BOOKINGS));
 	await Booking.update({ status: 'cancelled' }, { where: { quoteId }, transaction });
+	await bumpStamp('bookings', transaction);
 }

@@ -135,7 +135,7 @@ export async function updateContact(clientId: number, contactId: number, input: 
 		await user.update({ name: input.name, email: input.email }, { transaction });
 		return { field: 'contact changed', oldValue: before, newValue: `${input.name} <${input.email}>` };
 	});
-	userChanged();
+	await userChanged();
 	return getClient(clientId);
 }
 

@@ -33,8 +33,8 @@ export async function overviewFor(user: SessionUser): Promise<Overview> {
 	const [late, due] = seesStock ? await Promise.all([lateUnits(today), unitsDueForTest(today)]) : [[], null];
 	const isDesk = user.role === 'sales' || user.role === 'admin';
 	const [quotes, bookings, inRepair, flagged, notices] = await Promise.all([
-		seesQuotes ? listQuotes(user) : Promise.resolve([]),
-		seesStock ? listBookings(today) : Promise.resolve([]),
+		seesQuotes ? listQuotes(user, { limit: 8 }) : Promise.resolve([]),
+		seesStock ? listBookings(today, { until: inAWeek }) : Promise.resolve([]),
 		seesStock ? StockUnit.count({ where: { status: 'in-repair' } }) : Promise.resolve(null),
 		isDesk
 			? Quote.findAll({
@@ -56,8 +56,8 @@ export async function overviewFor(user: SessionUser): Promise<Overview> {
 			why: q.bookingIssue ?? q.recheckReason ?? (q.clientResponse ? CLIENT_ANSWER_WHY[q.clientResponse as ClientResponse] : 'Needs a look')
 		})),
 		notices,
-		quotes: quotes.slice(0, 8),
-		goingOut: bookings.filter((b) => b.startDate <= inAWeek),
+		quotes,
+		goingOut: bookings,
 		unitsInRepair: inRepair,
 		late,
 		tests: due && { overdue: due.filter((d) => d.status === 'overdue').length, dueSoon: due.filter((d) => d.status === 'due-soon').length }

@@ -1,21 +1,27 @@
-import { mkdtemp, readdir, readFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { QueryTypes } from 'sequelize';
+import { describe, expect, it } from 'vitest';
 import { useTestDatabase } from '../../../../tests/helpers/db';
 import { loudspeakerInput } from '../../../../tests/helpers/inventory-inputs';
 import { listAttachments, readAttachment, saveAttachment } from './inventory-attachments';
 import { loudspeakers } from './inventory-loudspeakers';
 import { safeOriginalName, sniffMimeType } from './upload-checks';
 
-useTestDatabase();
+const sequelize = useTestDatabase();
 
-let dir: string;
-beforeAll(async () => {
-	// Each run gets its own folder, so this file cannot touch another's files.
-	dir = await mkdtemp(path.join(tmpdir(), 'throwline-uploads-'));
-	process.env.UPLOAD_DIR = dir;
-});
+/** The stored file behind an attachment, as the database holds it. */
+async function storedFileOf(attachmentId: number) {
+	const [row] = await sequelize.query<{ name: string; sizeBytes: number; bytes: Buffer }>(
+		`SELECT f.name, f.sizeBytes, f.bytes FROM stored_files f
+		   JOIN model_attachments a ON a.storedName = f.name WHERE a.id = :attachmentId`,
+		{ type: QueryTypes.SELECT, replacements: { attachmentId } }
+	);
+	return row;
+}
+
+async function storedFileCount(): Promise<number> {
+	const [row] = await sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM stored_files', { type: QueryTypes.SELECT });
+	return Number(row.n);
+}
 
 const pdf = (size = 2048) => Uint8Array.from({ length: size }, (_, i) => (i < 8 ? '%PDF-1.7'.charCodeAt(i) : 32));
 const png = () => Uint8Array.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13]);
@@ -43,14 +49,24 @@ describe('type by magic bytes', () => {
 });
 
 describe('uploading attachments', () => {
-	it('stores a spec sheet under a generated name in UPLOAD_DIR and reads it back', async () => {
+	it('stores a spec sheet under a generated name in the database and reads it back', async () => {
 		const id = await model();
 		const row = await saveAttachment({ modelType: 'loudspeaker', modelId: id, kind: 'spec-sheet', originalName: 'sheet.pdf', bytes: pdf(), userId: null });
 		expect(row).toMatchObject({ kind: 'spec-sheet', mimeType: 'application/pdf', sizeBytes: 2048, originalName: 'sheet.pdf' });
-		const stored = await readdir(dir);
-		expect(stored.some((f) => /^[0-9a-f-]{36}\.pdf$/.test(f))).toBe(true);
+		const stored = await storedFileOf(row.id);
+		expect(stored.name).toMatch(/^[0-9a-f-]{36}\.pdf$/);
+		expect(Number(stored.sizeBytes)).toBe(2048);
 		const read = await readAttachment(row.id);
 		expect(read.bytes.subarray(0, 5).toString()).toBe('%PDF-');
+	});
+
+	it('keeps a spec sheet of the full 10 MB byte for byte (the server takes packets that large)', async () => {
+		const id = await model();
+		const bytes = pdf(10 * 1024 * 1024);
+		bytes[bytes.length - 1] = 0x0a;
+		const row = await saveAttachment({ modelType: 'loudspeaker', modelId: id, kind: 'spec-sheet', originalName: 'full.pdf', bytes, userId: null });
+		const read = await readAttachment(row.id);
+		expect(read.bytes.equals(Buffer.from(bytes))).toBe(true);
 	});
 
 	it('refuses an oversize spec sheet (over 10 MB) and an oversize photo (over 5 MB)', async () => {
@@ -69,22 +85,28 @@ describe('uploading attachments', () => {
 		expect(await listAttachments('loudspeaker', id)).toEqual([]);
 	});
 
-	it('a traversal name is stored harmlessly: only a generated file inside UPLOAD_DIR, the name kept for display', async () => {
+	it('a traversal name is stored harmlessly: only a generated name, the name kept for display', async () => {
 		const id = await model();
-		const before = new Set(await readdir(dir));
+		const before = await storedFileCount();
 		const row = await saveAttachment({ modelType: 'loudspeaker', modelId: id, kind: 'photo', originalName: '../../../../tmp/evil.png', bytes: png(), userId: null });
 		expect(row.originalName).toBe('evil.png');
-		const added = (await readdir(dir)).filter((f) => !before.has(f));
-		expect(added).toHaveLength(1);
-		expect(added[0]).toMatch(/^[0-9a-f-]{36}\.png$/);
-		expect(await readFile(path.join(dir, added[0]))).toHaveLength(12);
+		expect(await storedFileCount()).toBe(before + 1);
+		const stored = await storedFileOf(row.id);
+		expect(stored.name).toMatch(/^[0-9a-f-]{36}\.png$/);
+		expect(stored.bytes).toHaveLength(12);
 	});
 
 	it('a second photo replaces the first; an unknown model is 404', async () => {
 		const id = await model();
 		await saveAttachment({ modelType: 'loudspeaker', modelId: id, kind: 'photo', originalName: 'a.png', bytes: png(), userId: null });
 		await saveAttachment({ modelType: 'loudspeaker', modelId: id, kind: 'photo', originalName: 'b.webp', bytes: webp(), userId: null });
-		expect((await listAttachments('loudspeaker', id)).map((a) => a.originalName)).toEqual(['b.webp']);
+		const [kept] = await listAttachments('loudspeaker', id);
+		expect(kept.originalName).toBe('b.webp');
+		const [{ n }] = await sequelize.query<{ n: number }>(
+			`SELECT COUNT(*) AS n FROM stored_files f WHERE f.name LIKE '%.png' AND NOT EXISTS (SELECT 1 FROM model_attachments a WHERE a.storedName = f.name)`,
+			{ type: QueryTypes.SELECT }
+		);
+		expect(Number(n), 'the replaced photo is gone with its row').toBe(0);
 		await expect(saveAttachment({ modelType: 'amplifier', modelId: 999_999_999, kind: 'photo', originalName: 'a.png', bytes: png(), userId: null })).rejects.toMatchObject({ status: 404 });
 	});
 });

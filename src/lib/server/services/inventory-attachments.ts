@@ -1,26 +1,12 @@
 import { randomUUID } from 'node:crypto';
-import { mkdir, readFile, rm, writeFile } from 'node:fs/promises';
-import path from 'node:path';
 import type { AttachmentRow } from '$lib/inventory/types';
 import { ModelAttachment } from '../db/models';
+import { deleteStoredFiles, getStoredFile, putStoredFile } from '../storage/stored-files';
 import { DomainError } from './errors';
 import { plainRow, specModelExists, withTransaction } from './inventory-common';
 import { extensionFor, safeOriginalName, sniffMimeType, uploadProblem, type AttachmentKind } from './upload-checks';
 
 type ModelType = 'loudspeaker' | 'amplifier';
-
-/** Outside static/: files are served only through the signed-in route, never as public assets. */
-export function uploadDir(): string {
-	return path.resolve(process.env.UPLOAD_DIR || '.data/uploads');
-}
-
-/** Stored names are generated here and only ever match this shape, so no name can leave the folder. */
-const STORED_NAME = /^[0-9a-f-]{36}\.(pdf|jpg|png|webp)$/;
-
-function storedPath(storedName: string): string {
-	if (!STORED_NAME.test(storedName)) throw new Error(`refusing an unexpected stored name: ${storedName}`);
-	return path.join(uploadDir(), storedName);
-}
 
 function toRow(a: ModelAttachment): AttachmentRow {
 	const { storedName: _stored, ...row } = plainRow<AttachmentRow & { storedName: string }>(a);
@@ -49,60 +35,59 @@ export async function saveAttachment(input: {
 	if (problem) throw new DomainError(422, problem, { file: [problem] });
 
 	const mimeType = sniffMimeType(input.bytes)!;
-	const storedName = await storeFile(input.bytes, mimeType);
-	try {
-		const { row, replaced } = await withTransaction(undefined, async (transaction) => {
-			const where = { modelType: input.modelType, modelId: input.modelId, kind: input.kind };
-			const previous = await ModelAttachment.findAll({ where, transaction });
-			await ModelAttachment.destroy({ where, transaction });
-			const created = await ModelAttachment.create(
-				{ ...where, originalName: safeOriginalName(input.originalName), storedName, mimeType, sizeBytes: input.bytes.length, uploadedBy: input.userId },
-				{ transaction }
-			);
-			return { row: toRow(created), replaced: previous.map((p) => p.storedName) };
-		});
-		await removeStoredFiles(replaced);
-		return row;
-	} catch (err) {
-		await removeStoredFiles([storedName]);
-		throw err;
-	}
+	const storedName = `${randomUUID()}${extensionFor(mimeType)}`;
+	// Row and bytes in one transaction (stored_files, shared by every process): both or neither.
+	return withTransaction(undefined, async (transaction) => {
+		const where = { modelType: input.modelType, modelId: input.modelId, kind: input.kind };
+		const previous = await ModelAttachment.findAll({ where, transaction });
+		await ModelAttachment.destroy({ where, transaction });
+		await deleteStoredFiles(previous.map((p) => p.storedName), transaction);
+		await putStoredFile(storedName, mimeType, input.bytes, transaction);
+		const created = await ModelAttachment.create(
+			{ ...where, originalName: safeOriginalName(input.originalName), storedName, mimeType, sizeBytes: input.bytes.length, uploadedBy: input.userId },
+			{ transaction }
+		);
+		return toRow(created);
+	});
 }
 
 /** The attachment's row and bytes, for the serving route. */
 export async function readAttachment(id: number): Promise<{ row: AttachmentRow; bytes: Buffer }> {
 	const found = await ModelAttachment.findByPk(id);
 	if (!found) throw new DomainError(404, 'No such attachment.');
-	return { row: toRow(found), bytes: await readStoredFile(found.storedName) };
+	const bytes = await getStoredFile(found.storedName);
+	if (!bytes) throw new DomainError(404, 'The file of this attachment is missing.');
+	return { row: toRow(found), bytes };
 }
 
 export async function deleteAttachment(id: number): Promise<AttachmentRow> {
 	const found = await ModelAttachment.findByPk(id);
 	if (!found) throw new DomainError(404, 'No such attachment.');
-	await found.destroy();
-	await removeStoredFiles([found.storedName]);
+	await withTransaction(undefined, async (transaction) => {
+		await found.destroy({ transaction });
+		await deleteStoredFiles([found.storedName], transaction);
+	});
 	return toRow(found);
 }
 
 /**
  * Keeps checked bytes (see upload-checks) under a new generated name and returns that name. Other
- * uploads (damage photos) store through here too, so where files live is decided in one place.
+ * uploads (damage photos, the letterhead logo) store through here too, so where files live
+ * (MariaDB's stored_files, shared by every process) is decided in one place.
  */
 export async function storeFile(bytes: Uint8Array, mimeType: string): Promise<string> {
 	const storedName = `${randomUUID()}${extensionFor(mimeType)}`;
-	await mkdir(uploadDir(), { recursive: true });
-	await writeFile(storedPath(storedName), bytes, { flag: 'wx' });
+	await putStoredFile(storedName, mimeType, bytes);
 	return storedName;
 }
 
 /** The bytes stored under a name from storeFile; a missing file is a 404. */
 export async function readStoredFile(storedName: string): Promise<Buffer> {
-	return readFile(storedPath(storedName)).catch(() => {
-		throw new DomainError(404, 'The stored file is missing.');
-	});
+	const bytes = await getStoredFile(storedName);
+	if (!bytes) throw new DomainError(404, 'The stored file is missing.');
+	return bytes;
 }
 
-/** Best effort: a file left behind is harmless, a row without its file is reported as missing. */
 export async function removeStoredFiles(storedNames: readonly string[]): Promise<void> {
-	await Promise.all(storedNames.map((name) => rm(storedPath(name), { force: true }).catch(() => undefined)));
+	await deleteStoredFiles(storedNames);
 }

@@ -2,17 +2,19 @@ import { ForeignKeyConstraintError, UniqueConstraintError, type Model, type Tran
 import type { z } from 'zod';
 import { fieldErrors } from '../http';
 import { AmplifierModel, LoudspeakerModel } from '../db/models';
-import { CATALOGUE, invalidate } from '../cache';
+import { bumpStamp } from '../cache-stamps';
 import { DomainError } from './errors';
 
 /**
  * Runs `work` in the caller's transaction, or in a new one when the caller has none. Every inventory
- * write passes here, so this is where the quoting engine's cached catalogue is dropped on commit.
+ * write passes here, so this is where the catalogue's change stamp is bumped (every process drops
+ * its cached catalogue on its next request).
  */
 export async function withTransaction<T>(transaction: Transaction | undefined, work: (t: Transaction) => Promise<T>): Promise<T> {
-	const run = (t: Transaction) => {
-		t.afterCommit(() => invalidate(CATALOGUE));
-		return work(t);
+	const run = async (t: Transaction) => {
+		const result = await work(t);
+		await bumpStamp('catalogue', t); // last, after the write's own locks
+		return result;
 	};
 	if (transaction) return run(transaction);
 	return LoudspeakerModel.sequelize!.transaction(run);

@@ -60,8 +60,26 @@ export async function getLoadedPackage(id: number): Promise<LoadedPackage> {
 
 /** Every package with its models loaded, in name order (the list page and the quoting engine). */
 export async function listLoadedPackages(): Promise<LoadedPackage[]> {
-	const rows = await Package.findAll({ include: loadedInclude, order: [['name', 'ASC'], ...groupOrder] as never });
-	return rows.map(toLoaded);
+	// Four flat queries put together here: one nested include took 1 s at 600 packages, nearly all of
+	// it Sequelize folding the joined rows back into objects.
+	const [packages, groups] = await Promise.all([
+		Package.findAll({ order: [['name', 'ASC']] }),
+		PackageGroup.findAll({ order: [['packageId', 'ASC'], ['position', 'ASC']] })
+	]);
+	const [loudspeakers, amplifiers] = await Promise.all([
+		LoudspeakerModel.findAll({ where: { id: [...new Set(groups.map((g) => g.loudspeakerModelId))] } }),
+		AmplifierModel.findAll({ where: { id: [...new Set(groups.map((g) => g.amplifierModelId))] } })
+	]);
+	const loudspeakerById = new Map(loudspeakers.map((m) => [m.id, plainRow<LoadedPackage['groups'][number]['loudspeaker']>(m)]));
+	const amplifierById = new Map(amplifiers.map((m) => [m.id, plainRow<LoadedPackage['groups'][number]['amplifier']>(m)]));
+	const groupsOf = new Map<number, LoadedPackage['groups']>();
+	for (const g of groups) {
+		const { packageId, ...group } = g.get({ plain: true }) as PackageGroup & Record<string, unknown>;
+		const list = groupsOf.get(packageId) ?? [];
+		list.push({ ...group, loudspeaker: loudspeakerById.get(g.loudspeakerModelId)!, amplifier: amplifierById.get(g.amplifierModelId)! } as LoadedPackage['groups'][number]);
+		groupsOf.set(packageId, list);
+	}
+	return packages.map((p) => ({ ...plainRow<Omit<LoadedPackage, 'groups'>>(p), groups: groupsOf.get(p.id) ?? [] }) as LoadedPackage);
 }
 
 /** Loads each group's models and refuses (422, per field) unknown models or an unsafe channel plan. */

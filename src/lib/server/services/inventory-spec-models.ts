@@ -4,7 +4,7 @@ import { ModelAttachment, PackageGroup, StockUnit } from '../db/models';
 import { DomainError } from './errors';
 import { deleteHistory, recordChanges, recordCreation } from './inventory-history';
 import { plainRow, translateDbError, validOrThrow, withTransaction } from './inventory-common';
-import { removeStoredFiles } from './inventory-attachments';
+import { deleteStoredFiles } from '../storage/stored-files';
 import { flagQuotesForSpecChange, type SpecModelType } from './recheck';
 
 interface SpecModelConfig<S extends z.ZodType> {
@@ -81,7 +81,7 @@ export function specModelService<S extends z.ZodType>(config: SpecModelConfig<S>
 
 	/** Refuses (409) while a package uses the model or stock units of it exist. */
 	async function remove(id: number, transaction?: Transaction): Promise<void> {
-		const storedNames = await withTransaction(transaction, async (t) => {
+		await withTransaction(transaction, async (t) => {
 			const current = await find(id, t);
 			const [groups, units] = await Promise.all([
 				PackageGroup.count({ where: { [foreignKey]: id }, transaction: t }),
@@ -92,11 +92,10 @@ export function specModelService<S extends z.ZodType>(config: SpecModelConfig<S>
 			}
 			const attachments = await ModelAttachment.findAll({ where: { modelType, modelId: id }, transaction: t });
 			await ModelAttachment.destroy({ where: { modelType, modelId: id }, transaction: t });
+			await deleteStoredFiles(attachments.map((a) => a.storedName), t);
 			await deleteHistory(modelType, id, t);
 			await current.destroy({ transaction: t }).catch((err) => translateDbError(err, DUPLICATE));
-			return attachments.map((a) => a.storedName);
 		});
-		await removeStoredFiles(storedNames); // only once the rows are gone for good
 	}
 
 	return { modelType, fields, list, get, findByNameAndMaker, create, update, remove };

@@ -41,22 +41,75 @@ function summaryOf(x: Loaded): BookingSummary {
 	};
 }
 
-async function loadBookings(where: WhereOptions<Booking>, clientId?: number): Promise<BookingSummary[]> {
+/**
+ * Bookings with their lines and units, soonest first. Lines and units are read in one query each for
+ * all the bookings shown: joining them to the bookings multiplied the rows (lines × units per hire)
+ * and cost seconds at thousands of hires (see tests/bench, larger catalogues).
+ */
+async function loadBookings(
+	where: WhereOptions<Booking>,
+	clientId?: number,
+	limit?: number
+): Promise<BookingSummary[]> {
 	const bookings = await Booking.findAll({
 		where,
 		include: [
-			{ model: BookingLine, as: 'lines' },
-			{ model: BookingUnit, as: 'units' },
-			{ model: Quote, as: 'quote', ...(clientId ? { where: { clientId } } : {}), include: [{ model: Client, as: 'client', attributes: ['name'] }] }
+			{
+				model: Quote,
+				as: 'quote',
+				attributes: ['id', 'eventName', 'clientId'],
+				...(clientId ? { where: { clientId } } : {}),
+				include: [{ model: Client, as: 'client', attributes: ['name'] }]
+			}
 		],
-		order: [['startDate', 'ASC'], ['id', 'ASC']]
+		order: [['startDate', 'ASC'], ['id', 'ASC']],
+		...(limit ? { limit } : {})
 	});
-	return bookings.map((b) => summaryOf(b as Loaded));
+	if (bookings.length === 0) return [];
+	const ids = bookings.map((b) => b.id);
+	const [lines, units] = await Promise.all([
+		BookingLine.findAll({ where: { bookingId: ids } }),
+		BookingUnit.findAll({ where: { bookingId: ids }, attributes: ['bookingId', 'stockUnitId', 'dispatchedAt', 'returnedAt'] })
+	]);
+	const linesOf = groupBy(lines, (l) => l.bookingId);
+	const unitsOf = groupBy(units, (u) => u.bookingId);
+	return bookings.map((b) =>
+		summaryOf(Object.assign(b, { lines: linesOf.get(b.id) ?? [], units: unitsOf.get(b.id) ?? [] }) as Loaded)
+	);
 }
 
-/** The warehouse's working list: everything out or back (whatever its dates) and what is confirmed from a date on. */
-export function listBookings(fromDate: string): Promise<BookingSummary[]> {
-	return loadBookings({ [Op.or]: [{ status: ['out', 'back'] }, { status: 'confirmed', endDate: { [Op.gte]: fromDate } }] });
+function groupBy<T>(rows: readonly T[], key: (row: T) => number): Map<number, T[]> {
+	const groups = new Map<number, T[]>();
+	for (const row of rows) {
+		const k = key(row);
+		const list = groups.get(k);
+		if (list) list.push(row);
+		else groups.set(k, [row]);
+	}
+	return groups;
+}
+
+function workingListWhere(fromDate: string, until?: string): WhereOptions<Booking> {
+	const confirmed = until
+		? { status: 'confirmed', endDate: { [Op.gte]: fromDate }, startDate: { [Op.lte]: until } }
+		: { status: 'confirmed', endDate: { [Op.gte]: fromDate } };
+	return { [Op.or]: [{ status: ['out', 'back'] }, confirmed] } as WhereOptions<Booking>;
+}
+
+/**
+ * The warehouse's working list: everything out or back (whatever its dates) and what is confirmed
+ * from a date on (starting by `until`, when given), at most `limit` of them.
+ */
+export function listBookings(
+	fromDate: string,
+	options: { until?: string; limit?: number } = {}
+): Promise<BookingSummary[]> {
+	return loadBookings(workingListWhere(fromDate, options.until), undefined, options.limit);
+}
+
+/** How many bookings the working list holds in all (the page shows the first few hundred). */
+export function countBookings(fromDate: string): Promise<number> {
+	return Booking.count({ where: workingListWhere(fromDate) });
 }
 
 /** Every booking, optionally in one state, or only one client organisation's. */

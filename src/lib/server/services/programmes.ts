@@ -1,7 +1,8 @@
 import { UniqueConstraintError } from 'sequelize';
 import type { Programme } from '$lib/acoustics';
 import type { ProgrammeBands, ProgrammeInput } from '$lib/schemas/programmes';
-import { cached, invalidate } from '../cache';
+import { cached } from '../cache';
+import { bumpStamp } from '../cache-stamps';
 import { ProgrammeProfile } from '../db/models';
 import { DomainError } from './errors';
 
@@ -60,6 +61,6 @@ export async function saveProgramme(input: ProgrammeInput, id?: number): Promise
 		}
 		throw err;
 	} finally {
-		invalidate('programmes');
+		await bumpStamp('programmes'); // after the write: profiles grant no access, a crash between is harmless
 	}
 }

@@ -1,5 +1,5 @@
 /** Saving and reading quotes. A quote keeps every version; each version snapshots what was priced. */
-import type { Transaction } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 import type { PackageResult } from '$lib/quotes/evaluate-packages';
 import { isEditable, type ClientResponse, type QuoteStatus } from '$lib/quotes/states';
 import type { QuoteCreateInput, QuoteReviseInput } from '$lib/schemas/quotes';
@@ -156,16 +156,96 @@ function summaryOf(quote: Quote & { client?: Client; versions?: QuoteVersion[] }
 	};
 }
 
-export async function listQuotes(actor: SessionUser): Promise<QuoteSummary[]> {
-	const quotes = await Quote.findAll({
-		where: visibleTo(actor),
-		include: [
-			{ model: Client, as: 'client', attributes: ['name'] },
-			{ model: QuoteVersion, as: 'versions' }
-		],
-		order: [['updatedAt', 'DESC']]
-	});
-	return quotes.map((q) => summaryOf(q));
+/**
+ * Every quote the person may see, newest change first. One query over the current versions only,
+ * with the few figures the list shows read inside MariaDB: loading every version's whole evaluation
+ * to show its package name cost 3.6 s at 5,000 hires.
+ */
+export async function listQuotes(actor: SessionUser, options: QuoteListOptions = {}): Promise<QuoteSummary[]> {
+	const { where, replacements } = listFilter(actor, options.search);
+	const rows = await Quote.sequelize!.query<QuoteListRow>(
+		`SELECT q.id, q.eventName, q.status, q.clientId, c.name AS clientName, v.startDate, v.endDate,
+		        JSON_VALUE(v.evaluation, '$.packageName') AS packageName, JSON_VALUE(v.evaluation, '$.verdict') AS verdict,
+		        JSON_VALUE(v.price, '$.totalMinor') AS totalMinor, JSON_VALUE(v.price, '$.currency') AS currency,
+		        q.needsRecheck, q.clientResponse, q.updatedAt
+		   FROM quotes q
+		   JOIN clients c ON c.id = q.clientId
+		   JOIN quote_versions v ON v.quoteId = q.id AND v.version = q.currentVersion
+		  ${where}
+		  ORDER BY q.updatedAt DESC, q.id DESC
+		  ${options.limit ? 'LIMIT :limit' : ''}`,
+		{ type: QueryTypes.SELECT, replacements: { ...replacements, limit: options.limit ?? null } }
+	);
+	return rows.map((r) => ({
+		id: r.id,
+		reference: quoteReference(r.id),
+		eventName: r.eventName,
+		status: r.status,
+		clientId: r.clientId,
+		clientName: r.clientName,
+		startDate: dateOnly(r.startDate),
+		endDate: dateOnly(r.endDate),
+		packageName: r.packageName ?? '',
+		verdict: r.verdict ?? '',
+		totalMinor: Number(r.totalMinor),
+		currency: r.currency ?? '',
+		needsRecheck: Boolean(r.needsRecheck),
+		clientResponse: r.clientResponse ?? null,
+		updatedAt: new Date(r.updatedAt).toISOString()
+	}));
+}
+
+export interface QuoteListOptions {
+	/** Words in the event, the client's name or the reference (Q-00042). */
+	search?: string;
+	/** The newest this many; a list page shows a window, never every quote of a busy year. */
+	limit?: number;
+}
+
+/** How many quotes the person may see (matching the search, if any). */
+export async function countQuotes(actor: SessionUser, search?: string): Promise<number> {
+	const { where, replacements } = listFilter(actor, search);
+	const [row] = await Quote.sequelize!.query<{ n: number | string }>(
+		`SELECT COUNT(*) AS n FROM quotes q JOIN clients c ON c.id = q.clientId ${where}`,
+		{ type: QueryTypes.SELECT, replacements }
+	);
+	return Number(row.n);
+}
+
+function listFilter(actor: SessionUser, search?: string): { where: string; replacements: Record<string, unknown> } {
+	const clientId = visibleTo(actor).clientId;
+	const conditions: string[] = [];
+	if (clientId !== undefined) conditions.push('q.clientId = :clientId');
+	const words = (search ?? '').trim().slice(0, 100);
+	const id = /^q-?0*(\d+)$/i.exec(words)?.[1];
+	if (words) conditions.push(`(q.eventName LIKE :like OR c.name LIKE :like${id ? ' OR q.id = :id' : ''})`);
+	const like = `%${words.replace(/[\\%_]/g, (m) => `\\${m}`)}%`;
+	return {
+		where: conditions.length ? `WHERE ${conditions.join(' AND ')}` : '',
+		replacements: { clientId: clientId ?? null, like, id: id ? Number(id) : null }
+	};
+}
+
+interface QuoteListRow {
+	id: number;
+	eventName: string;
+	status: QuoteStatus;
+	clientId: number;
+	clientName: string;
+	startDate: string | Date;
+	endDate: string | Date;
+	packageName: string | null;
+	verdict: string | null;
+	totalMinor: string | number;
+	currency: string | null;
+	needsRecheck: number | boolean;
+	clientResponse: ClientResponse | null;
+	updatedAt: string | Date;
+}
+
+/** A DATE column as YYYY-MM-DD, whether the driver hands back text or a Date at midnight UTC. */
+function dateOnly(value: string | Date): string {
+	return value instanceof Date ? value.toISOString().slice(0, 10) : String(value).slice(0, 10);
 }
 
 export async function getQuote(id: number, actor: SessionUser): Promise<QuoteDetail> {

@@ -1,6 +1,7 @@
 import type { SettingsInput } from '$lib/schemas/programmes';
 import type { PriceSettings } from '$lib/quotes/pricing';
-import { cached, invalidate } from '../cache';
+import { cached } from '../cache';
+import { bumpStamp } from '../cache-stamps';
 import { CompanySettings } from '../db/models';
 
 export interface Settings {
@@ -65,8 +66,10 @@ export async function updateSettings(input: SettingsInput): Promise<Settings> {
 		companyContact: companyContact || null,
 		salesDeskEmail: salesDeskEmail || null
 	};
-	await CompanySettings.upsert({ id: 1, ...values });
-	invalidate('settings');
+	await CompanySettings.sequelize!.transaction(async (transaction) => {
+		await CompanySettings.upsert({ id: 1, ...values }, { transaction });
+		await bumpStamp('settings', transaction);
+	});
 	return getSettings();
 }
 
@@ -96,8 +99,10 @@ export function settingsForForm(settings: Settings): SettingsInput {
 /** Stores the logo file name after the upload was checked and written (see company-logo.ts). */
 export async function setLogoFile(logoFile: string | null): Promise<void> {
 	const current = await getSettings();
-	await CompanySettings.upsert({ id: 1, ...settingsRow(current), logoFile });
-	invalidate('settings');
+	await CompanySettings.sequelize!.transaction(async (transaction) => {
+		await CompanySettings.upsert({ id: 1, ...settingsRow(current), logoFile }, { transaction });
+		await bumpStamp('settings', transaction);
+	});
 }
 
 function settingsRow(settings: Settings) {

@@ -90,8 +90,10 @@ export async function updateUser(actorId: number, id: number, changes: UserUpdat
 			clientId: ['Choose a client']
 		});
 	}
-	await user.update({ ...changes, clientId });
-	userChanged();
+	await User.sequelize!.transaction(async (transaction) => {
+		await user.update({ ...changes, clientId }, { transaction });
+		await userChanged(transaction);
+	});
 	await user.reload({ include: [{ model: Client, as: 'client' }] });
 	return toRow(user);
 }
@@ -114,7 +116,7 @@ export async function setOwnPassword(userId: number, current: string, password: 
 		throw new DomainError(422, 'Your current password is not right.', { current: ['Enter your current password'] });
 	}
 	await user.update({ passwordHash: await hashPassword(password), passwordSetAt: new Date() });
-	userChanged();
+	await userChanged();
 	await endOtherSessions(userId);
 }
 

@@ -9,7 +9,7 @@ import {
 } from 'sequelize';
 import type { User } from './user';
 
-/** A spec sheet (PDF) or photo of a model; the bytes live under UPLOAD_DIR as `storedName`. */
+/** A spec sheet (PDF) or photo of a model; the bytes live in `stored_files` under `storedName`. */
 export class ModelAttachment extends Model<InferAttributes<ModelAttachment>, InferCreationAttributes<ModelAttachment>> {
 	declare id: CreationOptional<number>;
 	declare modelType: 'loudspeaker' | 'amplifier';

@@ -14,12 +14,15 @@ export class OutboundEmail extends Model<InferAttributes<OutboundEmail>, InferCr
 	declare subject: string;
 	declare textBody: string;
 	declare htmlBody: CreationOptional<string | null>;
-	declare status: CreationOptional<'pending' | 'sent' | 'failed'>;
+	declare status: CreationOptional<'pending' | 'sending' | 'sent' | 'failed'>;
 	declare attempts: CreationOptional<number>;
 	declare lastError: CreationOptional<string | null>;
 	declare quoteId: CreationOptional<number | null>;
 	declare attachments: CreationOptional<{ filename: string; contentType: string; contentBase64: string }[] | null>;
 	declare sentAt: CreationOptional<Date | null>;
+	/** When and by which process the row was claimed for sending (see mail/outbox.ts). */
+	declare claimedAt: CreationOptional<Date | null>;
+	declare claimedBy: CreationOptional<string | null>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 
@@ -31,12 +34,14 @@ export class OutboundEmail extends Model<InferAttributes<OutboundEmail>, InferCr
 				subject: { type: DataTypes.STRING(200), allowNull: false },
 				textBody: { type: DataTypes.TEXT, allowNull: false },
 				htmlBody: { type: DataTypes.TEXT, allowNull: true },
-				status: { type: DataTypes.ENUM('pending', 'sent', 'failed'), allowNull: false, defaultValue: 'pending' },
+				status: { type: DataTypes.ENUM('pending', 'sending', 'sent', 'failed'), allowNull: false, defaultValue: 'pending' },
 				attempts: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
 				lastError: { type: DataTypes.STRING(500), allowNull: true },
 				quoteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
 				attachments: { type: DataTypes.JSON, allowNull: true },
 				sentAt: { type: DataTypes.DATE, allowNull: true },
+				claimedAt: { type: DataTypes.DATE, allowNull: true },
+				claimedBy: { type: DataTypes.STRING(100), allowNull: true },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE
 			},
