@@ -5,7 +5,8 @@ import { isEditable, type QuoteStatus } from '$lib/quotes/states';
 import type { QuoteCreateInput, QuoteReviseInput } from '$lib/schemas/quotes';
 import type { QuoteRequestInput } from '$lib/schemas/evaluation';
 import { quoteReference } from '$lib/quotes/reference';
-import { db, Client, OutboundEmail, Quote, QuoteVersion } from '../db';
+import { db, Client, OutboundEmail, Quote, QuoteVersion, User } from '../db';
+import { STAFF_EMAIL_REFUSED } from '../auth/sign-in-links';
 import { invoicesFor, type InvoiceRow } from './invoice-rows';
 import type { SessionUser } from '../users';
 import { DomainError } from './errors';
@@ -59,6 +60,10 @@ async function clientFor(input: QuoteCreateInput, transaction: Transaction): Pro
 		return client.id;
 	}
 	const { name, contactName, email, phone } = input.newClient!;
+	const account = await User.findOne({ where: { email }, attributes: ['role'], transaction });
+	if (account && account.role !== 'client') {
+		throw new DomainError(422, STAFF_EMAIL_REFUSED, { 'newClient.email': [STAFF_EMAIL_REFUSED] });
+	}
 	const [client] = await Client.findOrCreate({
 		where: { email },
 		defaults: { name, contactName, email, phone: phone ?? null },
