@@ -1,5 +1,6 @@
 import { SvelteKitAuth, CredentialsSignin } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
+import { safeRedirectPath } from '$lib/safe-redirect';
 import { signInSchema } from '$lib/schemas/auth';
 import { checkCredentials } from '$lib/server/auth/credentials';
 import { consumeSignInLink } from '$lib/server/auth/sign-in-links';
@@ -33,6 +34,11 @@ export const { handle, signIn, signOut } = SvelteKitAuth({
 		})
 	],
 	callbacks: {
+		// Every redirect Auth.js makes (its callbackUrl / redirectTo included) stays on this site.
+		redirect({ url, baseUrl }) {
+			const path = url.startsWith(baseUrl) ? url.slice(baseUrl.length) || '/' : url;
+			return baseUrl + safeRedirectPath(path);
+		},
 		jwt({ token, user }) {
 			if (user) {
 				token.sub = user.id;

@@ -6,7 +6,7 @@
  */
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, type Transaction } from 'sequelize';
-import { safeRedirectPath } from '$lib/schemas/auth';
+import { safeRedirectPath } from '$lib/safe-redirect';
 import { SignInLink, User } from '../db/models';
 import { DomainError } from '../services/errors';
 import { hashPassword } from './password';
