@@ -43,6 +43,8 @@ export const { handle, signIn, signOut } = SvelteKitAuth({
 			if (user) {
 				token.sub = user.id;
 				token.role = (user as { role?: string }).role;
+				// Compared with the user's row on every request (hooks/attach-user.ts).
+				token.sessionVersion = (user as { sessionVersion?: number }).sessionVersion;
 			}
 			return token;
 		},
@@ -50,6 +52,7 @@ export const { handle, signIn, signOut } = SvelteKitAuth({
 			if (session.user) {
 				session.user.id = token.sub ?? '';
 				(session.user as { role?: unknown }).role = token.role;
+				(session as { sessionVersion?: unknown }).sessionVersion = token.sessionVersion;
 			}
 			return session;
 		}

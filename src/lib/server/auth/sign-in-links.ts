@@ -69,11 +69,11 @@ export async function peekSignInLink(token: string): Promise<{ email: string; re
 }
 
 /** Uses the link up and returns the person it signs in, or null when it is unknown, used or expired. */
-export async function consumeSignInLink(token: string): Promise<{ id: string; email: string; name: string; role: User['role'] } | null> {
+export async function consumeSignInLink(token: string): Promise<{ id: string; email: string; name: string; role: User['role']; sessionVersion: number } | null> {
 	const found = await findUsable(token);
 	if (!found) return null;
 	const [updated] = await SignInLink.update({ usedAt: new Date() }, { where: { id: found.link.id, usedAt: null } });
 	if (updated !== 1) return null; // another tab used it first
 	await found.user.update({ lastSignInAt: new Date() });
-	return { id: String(found.user.id), email: found.user.email, name: found.user.name, role: found.user.role };
+	return { id: String(found.user.id), email: found.user.email, name: found.user.name, role: found.user.role, sessionVersion: found.user.sessionVersion };
 }

@@ -75,6 +75,18 @@ export async function createUser(
 	}
 }
 
+/**
+ * Ends every session of the person (each session carries the version it was issued with; the
+ * attach-user hook compares it on every request). Called on sign-out and deactivation, and by
+ * anything that changes or resets a password. Returns the new version.
+ */
+export async function endSessions(userId: number): Promise<number> {
+	await User.increment('sessionVersion', { by: 1, where: { id: userId } });
+	userChanged();
+	const user = await User.findByPk(userId, { attributes: ['sessionVersion'] });
+	return user?.sessionVersion ?? 0;
+}
+
 /** Changes name, role or active status. An admin cannot lock themselves out. */
 export async function updateUser(actorId: number, id: number, changes: UserUpdateInput): Promise<UserRow> {
 	const user = await User.findByPk(id, { include: [{ model: Client, as: 'client' }] });
@@ -90,6 +102,7 @@ export async function updateUser(actorId: number, id: number, changes: UserUpdat
 		});
 	}
 	await user.update({ ...changes, clientId });
+	if (changes.active === false) await endSessions(id);
 	userChanged();
 	await user.reload({ include: [{ model: Client, as: 'client' }] });
 	return toRow(user);

@@ -20,6 +20,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
 	/** Set for `client` users: the organisation whose quotes and invoices they may see. */
 	declare clientId: ForeignKey<Client['id']> | null;
 	declare lastSignInAt: CreationOptional<Date | null>;
+	/** Carried in the session cookie; raising it ends every session issued before (endSessions). */
+	declare sessionVersion: CreationOptional<number>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 
@@ -34,6 +36,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
 				active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
 				clientId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
 				lastSignInAt: { type: DataTypes.DATE, allowNull: true },
+				sessionVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE
 			},
