@@ -5,6 +5,8 @@ import { isEditable, type QuoteStatus } from '$lib/quotes/states';
 import type { QuoteCreateInput, QuoteReviseInput } from '$lib/schemas/quotes';
 import type { QuoteRequestInput } from '$lib/schemas/evaluation';
 import { quoteReference } from '$lib/quotes/reference';
+import { MAX_CHARGE_MINOR, chargeTooLarge } from '$lib/quotes/hire-limits';
+import { formatMoney } from '$lib/quotes/pricing';
 import { db, Client, OutboundEmail, Quote, QuoteVersion, User } from '../db';
 import { STAFF_EMAIL_REFUSED } from '../auth/sign-in-links';
 import { invoicesFor, type InvoiceRow } from './invoice-rows';
@@ -49,6 +51,10 @@ async function snapshot(request: QuoteRequestInput, packageId: number, quoteId?:
 	const { results } = await evaluateForDesk(request, { packageIds: [packageId], excludeQuoteId: quoteId });
 	if (results.length === 0) {
 		throw new DomainError(422, 'That package is not available for quoting.', { packageId: ['Choose an active package'] });
+	}
+	if (chargeTooLarge(results[0].price.totalMinor)) {
+		const message = `The total is more than the payment service can take in one invoice (${formatMoney(MAX_CHARGE_MINOR, results[0].price.currency)}): shorten the hire or split it into several quotes.`;
+		throw new DomainError(422, message, { 'request.endDate': [message] });
 	}
 	return results[0];
 }
