@@ -13,7 +13,7 @@ export const throttleSignIn: Handle = async ({ event, resolve }) => {
 	if (event.request.method !== 'POST' || event.url.pathname !== CREDENTIALS_CALLBACK) return resolve(event);
 	const form = await event.request.clone().formData().catch(() => null);
 	const email = String(form?.get('email') ?? '').slice(0, 254);
-	const attempt = await throttledSignIn(email, event.getClientAddress(), () => resolve(event), (response) => {
+	const attempt = await throttledSignIn(email, event.getClientAddress(), async () => resolve(event), (response) => {
 		const location = response.headers.get('location') ?? '';
 		if (location.includes('code=inactive')) return 'not-checked';
 		if (location.includes('error=')) return 'refused';
