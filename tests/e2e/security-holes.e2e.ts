@@ -5,7 +5,7 @@
 import { randomUUID } from 'node:crypto';
 import Stripe from 'stripe';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { BASE_URL } from './browser';
+import { BASE_URL, launchBrowser, signIn } from './browser';
 import { api, sessionCookie } from './http';
 
 const ADMIN = 'admin@kestrel-yard.test';
@@ -163,6 +163,34 @@ describe('4. signing out ends the session', () => {
 });
 
 describe('5. security headers on every answer, and a failed sign-in is not a 500', () => {
+	it('the pages work under the CSP: no violation reported by the browser', async () => {
+		const browser = await launchBrowser();
+		const violations: string[] = [];
+		try {
+			const visits = [
+				[SALES, ['/', '/quotes', '/quotes/new', '/bookings']],
+				['warehouse@kestrel-yard.test', ['/inventory/loudspeakers', '/inventory/units', '/inventory/packages']],
+				[ADMIN, ['/admin/users', '/admin/settings']]
+			] as const;
+			for (const [who, paths] of visits) {
+				const page = await browser.newPage();
+				page.on('console', (m) => {
+					if (/Content Security Policy|Refused to/i.test(m.text())) violations.push(`${page.url()}: ${m.text().slice(0, 160)}`);
+				});
+				await signIn(page, who);
+				await page.waitForURL(`${BASE_URL}/`);
+				for (const path of paths) {
+					await page.goto(`${BASE_URL}${path}`);
+					await page.waitForLoadState('networkidle');
+				}
+				await page.close();
+			}
+		} finally {
+			await browser.close();
+		}
+		expect(violations).toEqual([]);
+	}, 120_000);
+
 	const expectHeaders = (response: Response) => {
 		expect(response.headers.get('x-content-type-options')).toBe('nosniff');
 		expect(response.headers.get('referrer-policy')).toBe('same-origin');
