@@ -8,7 +8,9 @@
 import { createHash } from 'node:crypto';
 import type { RateLimiterRes } from 'rate-limiter-flexible';
 import { ACCOUNT_RULE, ADDRESS_RULE, FAILURE_WINDOW_SECONDS, lockoutSeconds, type BackoffRule } from '$lib/sign-in-backoff';
-import { db } from '../db';
+import { env } from '$env/dynamic/private';
+import type { Sequelize } from 'sequelize';
+import { createSequelize, databaseConfigFrom } from '../db/connection';
 import { RateLimiterMariaDb } from './throttle-store';
 
 interface Dimension {
@@ -19,8 +21,16 @@ interface Dimension {
 
 let dimensions: { account: Dimension; address: Dimension } | undefined;
 
+// Its own small pool: a flood of sign-ins all updating one address's row queue on that row lock
+// while holding connections; in the app's pool they would starve every other request.
+const cache = globalThis as unknown as { throwlineThrottleSequelize?: Sequelize };
+function throttleDb(): Sequelize {
+	cache.throwlineThrottleSequelize ??= createSequelize(databaseConfigFrom(env), { pool: { max: 4, acquire: 10_000 } });
+	return cache.throwlineThrottleSequelize;
+}
+
 function dimension(name: string, rule: BackoffRule): Dimension {
-	const storeClient = db();
+	const storeClient = throttleDb();
 	return {
 		rule,
 		failures: new RateLimiterMariaDb({ storeClient, keyPrefix: `${name}-failures`, points: 1_000_000, duration: FAILURE_WINDOW_SECONDS }),
