@@ -1,5 +1,6 @@
 import { SvelteKitAuth, CredentialsSignin } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
+import { safeRedirectPath } from '$lib/safe-redirect';
 import { signInSchema } from '$lib/schemas/auth';
 import { checkCredentials } from '$lib/server/auth/credentials';
 import { consumeSignInLink } from '$lib/server/auth/sign-in-links';
@@ -33,10 +34,17 @@ export const { handle, signIn, signOut } = SvelteKitAuth({
 		})
 	],
 	callbacks: {
+		// Every redirect Auth.js makes (its callbackUrl / redirectTo included) stays on this site.
+		redirect({ url, baseUrl }) {
+			const path = url.startsWith(baseUrl) ? url.slice(baseUrl.length) || '/' : url;
+			return baseUrl + safeRedirectPath(path);
+		},
 		jwt({ token, user }) {
 			if (user) {
 				token.sub = user.id;
 				token.role = (user as { role?: string }).role;
+				// Compared with the user's row on every request (hooks/attach-user.ts).
+				token.sessionVersion = (user as { sessionVersion?: number }).sessionVersion;
 			}
 			return token;
 		},
@@ -44,6 +52,7 @@ export const { handle, signIn, signOut } = SvelteKitAuth({
 			if (session.user) {
 				session.user.id = token.sub ?? '';
 				(session.user as { role?: unknown }).role = token.role;
+				(session as { sessionVersion?: unknown }).sessionVersion = token.sessionVersion;
 			}
 			return session;
 		}

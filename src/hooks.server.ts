@@ -6,6 +6,7 @@ import { databaseDown } from './hooks/database-down';
 import { guardPages } from './hooks/guard-pages';
 import { refuseReservedAction } from './hooks/reserved-action';
 import { securityHeaders } from './hooks/security-headers';
+import { throttleSignIn } from './hooks/throttle-sign-in';
 import { startMailRetry } from '$lib/server/mail/retry';
 import { db } from '$lib/server/db';
 
@@ -22,7 +23,7 @@ export const init: ServerInit = () => {
 	});
 };
 
-export const handle = sequence(securityHeaders, databaseDown, refuseReservedAction, authHandle, attachUser, guardPages);
+export const handle = sequence(securityHeaders, databaseDown, refuseReservedAction, throttleSignIn, authHandle, attachUser, guardPages);
 
 /** Unexpected errors are logged with a reference; the person sees the reference, never a stack. */
 export const handleError: HandleServerError = ({ error, status, message }) => {

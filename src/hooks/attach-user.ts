@@ -9,16 +9,19 @@ const PUBLIC_PATHS = ['/api/health'];
 const SESSION_COOKIES = ['authjs.session-token', '__Secure-authjs.session-token'];
 
 /**
- * The user id in the session cookie. Decrypting the cookie costs more than the rest of a typical API
- * call, so the answer for one cookie value is kept for a few seconds (the person's row is still
- * checked on every request below, so a deactivation is never served from here).
+ * The user id and session version in the session cookie. Decrypting the cookie costs more than the
+ * rest of a typical API call, so the answer for one cookie value is kept for a few seconds: it never
+ * changes for that value. The person's row (active, role, current session version) is read on every
+ * request below, so an ended session or a deactivation is never served from here.
  */
-async function sessionUserId(event: Parameters<Handle>[0]['event']): Promise<number | null> {
+async function sessionClaims(event: Parameters<Handle>[0]['event']): Promise<{ id: number; sessionVersion: number } | null> {
 	const token = SESSION_COOKIES.map((name) => event.cookies.get(name)).find(Boolean);
 	if (!token) return null;
 	return cached(`session:${token}`, async () => {
-		const id = Number((await event.locals.auth())?.user?.id);
-		return Number.isInteger(id) && id > 0 ? id : null;
+		const session = (await event.locals.auth()) as { user?: { id?: string }; sessionVersion?: unknown } | null;
+		const id = Number(session?.user?.id);
+		const sessionVersion = Number(session?.sessionVersion);
+		return Number.isInteger(id) && id > 0 && Number.isInteger(sessionVersion) ? { id, sessionVersion } : null;
 	});
 }
 
@@ -34,8 +37,8 @@ export const attachUser: Handle = async ({ event, resolve }) => {
 	try {
 		// Other processes' writes (a deactivation, a price change) act on this request here.
 		await syncStamps();
-		const id = await sessionUserId(event);
-		if (id !== null) event.locals.user = await findActiveUser(id);
+		const claims = await sessionClaims(event);
+		if (claims !== null) event.locals.user = await findActiveUser(claims.id, claims.sessionVersion);
 	} catch (err) {
 		console.error('[attach-user] database unavailable:', (err as Error).message);
 		return unavailable(event);

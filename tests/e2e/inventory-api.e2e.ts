@@ -136,7 +136,7 @@ describe('attachments over HTTP', () => {
 		const served = await fetch(`${BASE_URL}/api/attachments/${stored.json.id}`, { headers: { cookie: cookies.sales } });
 		expect(served.status).toBe(200);
 		expect(served.headers.get('content-type')).toBe('application/pdf');
-		expect(served.headers.get('content-disposition')).toBe(`inline; filename="spec sheet.pdf"; filename*=UTF-8''spec%20sheet.pdf`);
+		expect(served.headers.get('content-disposition')).toBe(`attachment; filename="spec sheet.pdf"; filename*=UTF-8''spec%20sheet.pdf`);
 		expect(new Uint8Array(await served.arrayBuffer())).toEqual(pdfBytes);
 		expect((await fetch(`${BASE_URL}/api/attachments/${stored.json.id}`)).status).toBe(401);
 		const client = await sessionCookie('organiser@millbrook-riverside.test');

@@ -9,7 +9,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BASE_URL } from './browser';
-import { api } from './http';
+import { api, sessionCookie } from './http';
 import {
 	makeInventoryFixtures,
 	makeThrowaway,
@@ -24,7 +24,7 @@ import {
 	type Expected,
 	type Observed
 } from './proof/outcome';
-import { ROLES, signInEveryone, type Role, type Sessions } from './proof/people';
+import { EMAILS, ROLES, signInEveryone, type Role, type Sessions } from './proof/people';
 import { makeQuoteFixtures, type QuoteFixtures } from './proof/quotes';
 import { endpoint, formAction, loadAlone, pageHtml } from './proof/requests';
 import { discoverEntryPoints, type EntryPoint } from './proof/routes';
@@ -343,18 +343,12 @@ async function observe(
 					)
 				}
 			];
-		case 'action':
-			return [
-				{
-					how: 'action',
-					seen: await formAction(
-						url,
-						entry.action!,
-						row.form ?? { proofMatrix: 'not a field' },
-						cookie
-					)
-				}
-			];
+		case 'action': {
+			const seen = await formAction(url, entry.action!, row.form ?? { proofMatrix: 'not a field' }, cookie);
+			// Signing out ends every session of that person: the rest of the matrix needs a new one.
+			if (entry.route === '/signout' && role !== 'out') sessions[role] = await sessionCookie(EMAILS[role]);
+			return [{ how: 'action', seen }];
+		}
 		case 'load':
 			return [
 				{ how: 'page', seen: await pageHtml(url, cookie) },

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { parseIsoDate } from '../quotes/hire-days';
+import { hireDays, parseIsoDate } from '../quotes/hire-days';
+import { MAX_HIRE_DAYS, localIsoDate } from '../quotes/hire-limits';
 
 const FT = 0.3048;
 const toMetres = (value: number, unit: 'm' | 'ft') => (unit === 'ft' ? value * FT : value);
@@ -51,6 +52,12 @@ export const evaluationRequestSchema = z
 		}
 		if (r.startDate > r.endDate) {
 			ctx.addIssue({ code: 'custom', path: ['endDate'], message: 'The hire cannot end before it starts' });
+		} else if (parseIsoDate(r.startDate) !== null && parseIsoDate(r.endDate) !== null && hireDays(r.startDate, r.endDate) > MAX_HIRE_DAYS) {
+			ctx.addIssue({ code: 'custom', path: ['endDate'], message: `A hire lasts at most ${MAX_HIRE_DAYS} days` });
+		}
+		// Read at validation time, so a long-running server never freezes "today".
+		if (parseIsoDate(r.startDate) !== null && r.startDate < localIsoDate(new Date())) {
+			ctx.addIssue({ code: 'custom', path: ['startDate'], message: 'The hire cannot start in the past' });
 		}
 	});
 export type QuoteRequestInput = z.infer<typeof evaluationRequestSchema>;

@@ -54,11 +54,12 @@ export function attachmentResponse(row: AttachmentRow, bytes: Buffer): Response 
 		headers: {
 			'content-type': row.mimeType,
 			'content-length': String(bytes.length),
-			'content-disposition': contentDisposition('inline', row.originalName),
+			// A PDF passes the magic-byte check even when it is also an HTML page (a polyglot), so spec
+			// sheets are downloaded, never rendered as a page of ours; photos show inline but sandboxed.
+			'content-disposition': contentDisposition(row.mimeType === 'application/pdf' ? 'attachment' : 'inline', row.originalName),
 			'cache-control': 'private, no-store',
-			// A photo opened on its own gets no scripts or plugins; PDFs are left to the browser's
-			// own viewer, which a sandbox would block. The type is fixed by the stored magic bytes.
-			...(row.mimeType === 'application/pdf' ? {} : { 'content-security-policy': "default-src 'none'; img-src 'self'; sandbox" })
+			'x-content-type-options': 'nosniff',
+			'content-security-policy': "default-src 'none'; img-src 'self'; sandbox"
 		}
 	});
 }

@@ -7,6 +7,7 @@ export interface SignedInUser {
 	email: string;
 	name: string;
 	role: Role;
+	sessionVersion: number;
 }
 
 export type CredentialCheck =
@@ -19,12 +20,12 @@ export type CredentialCheck =
  */
 export async function checkCredentials(email: string, password: string): Promise<CredentialCheck> {
 	const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
-	const matches = await verifyPassword(password, user?.passwordHash ?? decoyHashOnce());
+	const matches = await verifyPassword(password, user?.passwordHash ?? (await decoyHashOnce()));
 	if (!user || !matches) return { ok: false, reason: 'invalid' };
 	if (!user.active) return { ok: false, reason: 'inactive' };
 	await user.update({ lastSignInAt: new Date() });
 	return {
 		ok: true,
-		user: { id: String(user.id), email: user.email, name: user.name, role: user.role }
+		user: { id: String(user.id), email: user.email, name: user.name, role: user.role, sessionVersion: user.sessionVersion }
 	};
 }

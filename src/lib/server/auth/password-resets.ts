@@ -6,7 +6,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import { Op } from 'sequelize';
 import { db, PasswordReset, User } from '../db';
 import { hashPassword } from './password';
-import { endOtherSessions } from '../services/users';
+import { endSessions } from '../services/users';
 import { userChanged } from '../users';
 
 export const RESET_VALID_MINUTES = 60;
@@ -48,6 +48,6 @@ export async function completePasswordReset(token: string, password: string): Pr
 	});
 	if (!done) return null;
 	await userChanged();
-	await endOtherSessions(found.user.id);
+	await endSessions(found.user.id);
 	return { email: found.user.email };
 }

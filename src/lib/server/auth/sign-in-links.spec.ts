@@ -43,4 +43,25 @@ describe('sign-in links', () => {
 		await User.update({ active: false }, { where: { id: user.id } });
 		expect(await consumeSignInLink(fresh)).toBeNull();
 	});
+
+	it('issues links only for active client accounts, never for staff', async () => {
+		const staff = await User.create({ email: uniqueEmail('staff'), name: 'Staff Person', role: 'admin', passwordHash: 'x' });
+		await expect(createSignInLink(staff.id, '/')).rejects.toThrow(/client accounts/);
+		expect(await SignInLink.count({ where: { userId: staff.id } })).toBe(0);
+	});
+
+	it('never hands a staff account to a client organisation that shares its e-mail', async () => {
+		const staff = await User.create({ email: uniqueEmail('desk'), name: 'Desk Person', role: 'sales', passwordHash: 'x' });
+		const client = await Client.create({ name: 'Borrowed', contactName: 'Someone', email: staff.email });
+		await expect(clientAccountFor(client)).rejects.toMatchObject({ status: 422 });
+	});
+
+	it('an older link stops working when a new one is issued', async () => {
+		const user = await clientAccountFor(await newClient());
+		const older = await createSignInLink(user.id, '/quotes/1');
+		const newer = await createSignInLink(user.id, '/quotes/2');
+		expect(await peekSignInLink(older)).toBeNull();
+		expect(await consumeSignInLink(older)).toBeNull();
+		expect(await consumeSignInLink(newer)).toMatchObject({ id: String(user.id) });
+	});
 });

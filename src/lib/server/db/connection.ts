@@ -25,8 +25,11 @@ export function databaseConfigFrom(env: Record<string, string | undefined>): Dat
 	};
 }
 
-/** One Sequelize instance with every model registered; used by the app, the scripts and the tests. */
-export function createSequelize(config: DatabaseConfig): Sequelize {
+/**
+ * One Sequelize instance with every model registered; used by the app, the scripts and the tests.
+ * `pool` gives a small separate pool without models (the sign-in throttle's, see sign-in-throttle.ts).
+ */
+export function createSequelize(config: DatabaseConfig, separate?: { pool: { max: number; acquire: number } }): Sequelize {
 	const sequelize = new Sequelize(config.database, config.user, config.password, {
 		host: config.host,
 		port: config.port,
@@ -37,8 +40,8 @@ export function createSequelize(config: DatabaseConfig): Sequelize {
 		// Short timeouts so a stopped database turns into a quick 503, not a hung request.
 		dialectOptions: { connectTimeout: 3000, acquireTimeout: 5000 },
 		// Bookings racing for the same stock queue on row locks while holding a connection: allow a wait.
-		pool: { max: 20, min: 0, acquire: 20_000, idle: 10_000 }
+		pool: { min: 0, idle: 10_000, ...(separate?.pool ?? { max: 20, acquire: 20_000 }) }
 	});
-	initModels(sequelize);
+	if (!separate) initModels(sequelize);
 	return sequelize;
 }

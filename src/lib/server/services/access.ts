@@ -2,7 +2,7 @@
  * Getting back in: "e-mail me a sign-in link" (client accounts only) and "reset my password" (anyone).
  * Both answer the same whatever the address, so they tell nobody which addresses have accounts.
  */
-import { safeRedirectPath } from '$lib/schemas/auth';
+import { safeRedirectPath } from '$lib/safe-redirect';
 import { createSignInLink } from '../auth/sign-in-links';
 import { issuePasswordReset, RESET_VALID_MINUTES } from '../auth/password-resets';
 import { throttleLinkRequest, type ThrottleVerdict } from '../auth/throttle';

@@ -9,6 +9,7 @@ import { Client, Invoice } from '../db';
 import { isPaymentServiceDown, stripe } from '../payments/stripe-client';
 import { DomainError } from './errors';
 import { quoteReference } from '$lib/quotes/reference';
+import { chargeTooLarge } from '$lib/quotes/hire-limits';
 import type { QuoteDetail } from './quotes';
 import { getSettings } from './settings';
 
@@ -52,6 +53,9 @@ export interface IssuedInvoice {
 export async function issueStripeInvoice(quote: QuoteDetail, kind: 'deposit' | 'balance'): Promise<IssuedInvoice> {
 	const price = quote.result.price;
 	const amounts = kind === 'deposit' ? depositAmounts(price) : balanceAmounts(price);
+	if (chargeTooLarge(amounts.amountMinor)) {
+		throw new DomainError(422, 'This invoice is more than the payment service can take at once; split the hire into several quotes.');
+	}
 	const settings = await getSettings();
 	const key = `throwline-quote-${quote.id}-${Date.parse(quote.versions.at(-1)!.createdAt)}-v${quote.version}-${kind}`;
 	const currency = price.currency.toLowerCase();

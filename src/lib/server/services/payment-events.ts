@@ -13,21 +13,40 @@ import { reservationTransaction, reserveStockForQuote } from './bookings';
 import { quoteReference } from '$lib/quotes/reference';
 import { getSettings, type Settings } from './settings';
 import { noteForDesk } from './desk-notices';
+import { isPaymentServiceDown, stripe } from '../payments/stripe-client';
 
 export type EventOutcome = { status: 200 | 503; outcome: string };
 
 class RetryLater extends Error {}
 
+/**
+ * "Paid" is believed only from the payment service itself: the invoice is fetched through the SDK
+ * (before our transaction, which must not wait on the network) and its status and amount checked.
+ */
+async function confirmedInvoice(event: Stripe.Event): Promise<Stripe.Invoice | null> {
+	if (event.type !== 'invoice.paid') return null;
+	const id = (event.data.object as Stripe.Invoice).id;
+	if (!id) return null;
+	try {
+		return await stripe().invoices.retrieve(id);
+	} catch (err) {
+		if (isPaymentServiceDown(err)) throw new RetryLater('payment service not answering; retry later');
+		if ((err as { code?: string }).code === 'resource_missing') return null; // unknown there: never paid
+		throw err;
+	}
+}
+
 export async function applyStripeEvent(event: Stripe.Event): Promise<EventOutcome> {
 	let emailIds: number[] = [];
-	// Read before the transaction: a query outside it while every pooled connection is held by
-	// transactions queued on the same row locks would wait for a connection that never frees.
-	const settings = await getSettings();
-	const company = settings.companyName;
 	try {
+		// Read before the transaction: a query outside it while every pooled connection is held by
+		// transactions queued on the same row locks would wait for a connection that never frees.
+		const settings = await getSettings();
+		const company = settings.companyName;
+		const confirmed = await confirmedInvoice(event);
 		const outcome = await reservationTransaction(async (transaction) => {
 			await WebhookEvent.create({ id: event.id, type: event.type, outcome: 'applying' }, { transaction });
-			const result = await route(event, { t: transaction, company, settings });
+			const result = await route(event, { t: transaction, company, settings, confirmed });
 			emailIds = result.emailIds;
 			await WebhookEvent.update({ outcome: result.outcome }, { where: { id: event.id }, transaction });
 			return result.outcome;
@@ -49,6 +68,8 @@ interface Ctx {
 	t: Transaction;
 	company: string;
 	settings: Settings;
+	/** For invoice.paid: the invoice as the payment service has it now. */
+	confirmed: Stripe.Invoice | null;
 }
 
 async function route(event: Stripe.Event, ctx: Ctx): Promise<Applied> {
@@ -83,11 +104,26 @@ async function emailTo(quote: Quote, build: (to: string, q: Parameters<typeof re
 	return (await queueEmail(build(client!.email, ref, company), t)).id;
 }
 
+/** Why a "paid" event must change nothing, or null when the payment service confirms it. */
+function paidRefusal(invoice: Invoice, confirmed: Stripe.Invoice | null): string | null {
+	if (invoice.status === 'void') return 'paid ignored: we voided this invoice';
+	if (!confirmed || confirmed.status !== 'paid') return `paid ignored: the payment service has it ${confirmed?.status ?? 'unknown'}`;
+	if (confirmed.amount_paid !== invoice.amountMinor || confirmed.currency?.toLowerCase() !== invoice.currency.toLowerCase()) {
+		return `paid ignored: the payment service shows ${confirmed.amount_paid} ${confirmed.currency}, we invoiced ${invoice.amountMinor} ${invoice.currency}`;
+	}
+	return null;
+}
+
 async function invoicePaid(object: Stripe.Invoice, ctx: Ctx): Promise<Applied> {
 	const { t } = ctx;
 	const invoice = await ourInvoice(object.id, t);
 	if (invoice.status === 'paid') return { outcome: 'invoice already paid', emailIds: [] };
-	const legacy = object as Stripe.Invoice & { payment_intent?: string | null };
+	const refusal = paidRefusal(invoice, ctx.confirmed);
+	if (refusal) {
+		console.warn(`[webhook] ${refusal} (invoice ${invoice.id}, ${object.id})`);
+		return { outcome: refusal, emailIds: [] };
+	}
+	const legacy = ctx.confirmed as Stripe.Invoice & { payment_intent?: string | null };
 	await invoice.update({ status: 'paid', paidAt: new Date(), paymentIntentId: legacy.payment_intent ?? null, lastPaymentError: null }, { transaction: t });
 	const quote = (await Quote.findByPk(invoice.quoteId, { transaction: t, lock: t.LOCK.UPDATE }))!;
 	const emailIds = [await emailTo(quote, (to, q, c) => receiptEmail(to, q, invoice.amountMinor, invoice.currency, c), ctx)];

@@ -3,12 +3,13 @@
  * confirmed booking, plus the ways it can go wrong. Events are fetched from the stand-in and
  * applied directly (the web route that verifies signatures is covered by the browser tests).
  */
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { useTestDatabase } from '../../../../tests/helpers/db';
 import { makeClientUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
 import { eventFor, fakeConfig } from '../../../../tests/helpers/stripe-fake';
 import { CARD_DECLINED, CARD_SUCCEEDS, payOnHostedPage } from '../../../../tests/fakes/stripe/testing';
 import { Booking, BookingLine, Invoice, Quote } from '../db/models';
+import { stripe } from '../payments/stripe-client';
 import { applyStripeEvent } from './payment-events';
 import { applyQuoteAction } from './quote-actions';
 import { createQuote, getQuote } from './quotes';
@@ -118,7 +119,9 @@ describe('racing for the last units', () => {
 			const invoice = await Invoice.create({ quoteId: q.id, kind: 'deposit', stripeInvoiceId: `in_race_${q.id}`, number: null, status: 'open', amountMinor: 100, taxMinor: 0, currency: 'GBP', hostedUrl: null });
 			events.push({ id: `evt_race_${q.id}`, object: 'event', type: 'invoice.paid', data: { object: { id: invoice.stripeInvoiceId, object: 'invoice' } } });
 		}
-		const outcomes = await Promise.all(events.map((e) => applyStripeEvent(e as never)));
+		// These invoices exist only in our database: the payment service is asked to confirm each as paid.
+		const retrieve = vi.spyOn(stripe().invoices, 'retrieve').mockImplementation((async (id: string) => ({ id, status: 'paid', amount_paid: 100, currency: 'gbp' })) as never);
+		const outcomes = await Promise.all(events.map((e) => applyStripeEvent(e as never))).finally(() => retrieve.mockRestore());
 		expect(outcomes.every((o) => o.status === 200)).toBe(true);
 		const confirmed = await Quote.count({ where: { id: quotes.map((q) => q.id), status: 'confirmed' } });
 		const flagged = await Quote.count({ where: { id: quotes.map((q) => q.id), status: 'deposit-paid' } });

@@ -5,7 +5,10 @@ import { isEditable, type ClientResponse, type QuoteStatus } from '$lib/quotes/s
 import type { QuoteCreateInput, QuoteReviseInput } from '$lib/schemas/quotes';
 import type { QuoteRequestInput } from '$lib/schemas/evaluation';
 import { quoteReference } from '$lib/quotes/reference';
+import { MAX_CHARGE_MINOR, chargeTooLarge } from '$lib/quotes/hire-limits';
+import { formatMoney } from '$lib/quotes/pricing';
 import { db, Client, OutboundEmail, Quote, QuoteVersion, User } from '../db';
+import { STAFF_EMAIL_REFUSED } from '../auth/sign-in-links';
 import { invoicesFor, type InvoiceRow } from './invoice-rows';
 import type { SessionUser } from '../users';
 import { DomainError } from './errors';
@@ -56,6 +59,10 @@ async function snapshot(request: QuoteRequestInput, packageId: number, quoteId?:
 	if (results.length === 0) {
 		throw new DomainError(422, 'That package is not available for quoting.', { packageId: ['Choose an active package'] });
 	}
+	if (chargeTooLarge(results[0].price.totalMinor)) {
+		const message = `The total is more than the payment service can take in one invoice (${formatMoney(MAX_CHARGE_MINOR, results[0].price.currency)}): shorten the hire or split it into several quotes.`;
+		throw new DomainError(422, message, { 'request.endDate': [message] });
+	}
 	return results[0];
 }
 
@@ -66,6 +73,10 @@ async function clientFor(input: QuoteCreateInput, transaction: Transaction): Pro
 		return client.id;
 	}
 	const { name, contactName, email, phone } = input.newClient!;
+	const account = await User.findOne({ where: { email }, attributes: ['role'], transaction });
+	if (account && account.role !== 'client') {
+		throw new DomainError(422, STAFF_EMAIL_REFUSED, { 'newClient.email': [STAFF_EMAIL_REFUSED] });
+	}
 	const [client] = await Client.findOrCreate({
 		where: { email },
 		defaults: { name, contactName, email, phone: phone ?? null },

@@ -3,7 +3,7 @@ import { uniqueEmail, useTestDatabase } from '../../../../tests/helpers/db';
 import { Client } from '../db/models';
 import { findActiveUser } from '../users';
 import { DomainError } from './errors';
-import { createUser, updateUser } from './users';
+import { createUser, endSessions, updateUser } from './users';
 
 useTestDatabase();
 
@@ -32,13 +32,29 @@ describe('user management', () => {
 	it('changes a role and takes effect on the next request', async () => {
 		const { user } = await createUser({ ...base, email: uniqueEmail() });
 		await updateUser(-1, user.id, { role: 'sales' });
-		expect((await findActiveUser(user.id))?.role).toBe('sales');
+		expect((await findActiveUser(user.id, 1))?.role).toBe('sales');
 	});
 
 	it('a deactivated account no longer resolves to a signed-in user', async () => {
 		const { user } = await createUser({ ...base, email: uniqueEmail() });
 		await updateUser(-1, user.id, { active: false });
-		expect(await findActiveUser(user.id)).toBeNull();
+		expect(await findActiveUser(user.id, 1)).toBeNull();
+	});
+
+	it('endSessions ends every session issued before: the old version no longer resolves', async () => {
+		const { user } = await createUser({ ...base, email: uniqueEmail() });
+		expect(await findActiveUser(user.id, 1)).not.toBeNull();
+		const version = await endSessions(user.id);
+		expect(version).toBe(2);
+		expect(await findActiveUser(user.id, 1)).toBeNull();
+		expect((await findActiveUser(user.id, 2))?.id).toBe(user.id);
+	});
+
+	it('deactivation ends sessions, so reactivating does not bring old ones back', async () => {
+		const { user } = await createUser({ ...base, email: uniqueEmail() });
+		await updateUser(-1, user.id, { active: false });
+		await updateUser(-1, user.id, { active: true });
+		expect(await findActiveUser(user.id, 1)).toBeNull();
 	});
 
 	it('an admin cannot deactivate themselves or drop their own admin role', async () => {

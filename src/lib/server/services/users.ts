@@ -76,6 +76,18 @@ export async function createUser(
 	}
 }
 
+/**
+ * Ends every session of the person (each session carries the version it was issued with; the
+ * attach-user hook compares it on every request). Called on sign-out and deactivation, and by
+ * anything that changes or resets a password. Returns the new version.
+ */
+export async function endSessions(userId: number): Promise<number> {
+	await User.increment('sessionVersion', { by: 1, where: { id: userId } });
+	await userChanged();
+	const user = await User.findByPk(userId, { attributes: ['sessionVersion'] });
+	return user?.sessionVersion ?? 0;
+}
+
 /** Changes name, role or active status. An admin cannot lock themselves out. */
 export async function updateUser(actorId: number, id: number, changes: UserUpdateInput): Promise<UserRow> {
 	const user = await User.findByPk(id, { include: [{ model: Client, as: 'client' }] });
@@ -94,6 +106,7 @@ export async function updateUser(actorId: number, id: number, changes: UserUpdat
 		await user.update({ ...changes, clientId }, { transaction });
 		await userChanged(transaction);
 	});
+	if (changes.active === false) await endSessions(id);
 	await user.reload({ include: [{ model: Client, as: 'client' }] });
 	return toRow(user);
 }
@@ -102,14 +115,12 @@ export async function updateUser(actorId: number, id: number, changes: UserUpdat
  * Ends the person's other signed-in sessions after their password changes.
  * bumped by session versions
  */
-export async function endOtherSessions(_userId: number): Promise<void> {}
-
 /**
  * Sets one's own password while signed in. Staff give their current password; a client need not, as
  * they may have signed in by link and never had one (the link went to their inbox, which is what a
  * reset would ask for too).
  */
-export async function setOwnPassword(userId: number, current: string, password: string): Promise<void> {
+export async function setOwnPassword(userId: number, current: string, password: string): Promise<number> {
 	const user = await User.findByPk(userId);
 	if (!user || !user.active) throw new DomainError(404, 'No such user.');
 	if (user.role !== 'client' && !(await verifyPassword(current, user.passwordHash))) {
@@ -117,7 +128,8 @@ export async function setOwnPassword(userId: number, current: string, password: 
 	}
 	await user.update({ passwordHash: await hashPassword(password), passwordSetAt: new Date() });
 	await userChanged();
-	await endOtherSessions(userId);
+	// Every session ends; the account page re-issues its own cookie with the returned version.
+	return endSessions(userId);
 }
 
 /** Whether the person has chosen a password yet (clients start without one). */

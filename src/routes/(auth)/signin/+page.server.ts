@@ -3,8 +3,11 @@ import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import type { CredentialsSignin } from '@auth/sveltekit';
 import { signIn } from '../../../auth';
-import { safeRedirectPath, signInSchema } from '$lib/schemas/auth';
+import { safeRedirectPath } from '$lib/safe-redirect';
+import { signInSchema } from '$lib/schemas/auth';
 import { isDatabaseDown } from '$lib/server/health';
+import { throttledSignIn } from '$lib/server/auth/sign-in-throttle';
+import { retryMessage } from '$lib/sign-in-backoff';
 import { DATABASE_DOWN_MESSAGE } from '../../../hooks/unavailable';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -35,10 +38,31 @@ export const actions: Actions = {
 		body.set('redirectTo', safeRedirectPath(form.data.redirectTo));
 		const request = new Request(event.request.url, { method: 'POST', headers, body });
 
+		// Auth.js answers by throwing: a redirect on success, CredentialsSignin on a refusal.
+		let attempt;
 		try {
-			await signIn({ ...event, request });
-		} catch (thrown) {
-			// Success arrives as a redirect; a refusal as CredentialsSignin carrying our code.
+			attempt = await throttledSignIn(
+				form.data.email,
+				event.getClientAddress(),
+				async () => {
+					try {
+						await signIn({ ...event, request });
+						return undefined;
+					} catch (thrown) {
+						return thrown;
+					}
+				},
+				(thrown) => (isRedirect(thrown) ? 'signed-in' : isCredentialsSignin(thrown) && thrown.code !== 'inactive' ? 'refused' : 'not-checked')
+			);
+		} catch (err) {
+			if (isDatabaseDown(err)) return message(form, DATABASE_DOWN_MESSAGE, { status: 503 });
+			throw err;
+		}
+		if (attempt.throttled) {
+			return message(form, retryMessage(attempt.retryAfterSeconds), { status: 429 });
+		}
+		const thrown = attempt.value;
+		if (thrown !== undefined) {
 			if (isRedirect(thrown)) {
 				const target = new URL(thrown.location, event.url);
 				redirect(303, safeRedirectPath(target.pathname + target.search));

@@ -22,6 +22,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
 	declare lastSignInAt: CreationOptional<Date | null>;
 	/** Null until the person chooses a password (a client account starts with an unusable one). */
 	declare passwordSetAt: CreationOptional<Date | null>;
+	/** Carried in the session cookie; raising it ends every session issued before (endSessions). */
+	declare sessionVersion: CreationOptional<number>;
 	declare createdAt: CreationOptional<Date>;
 	declare updatedAt: CreationOptional<Date>;
 
@@ -37,6 +39,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
 				clientId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
 				lastSignInAt: { type: DataTypes.DATE, allowNull: true },
 				passwordSetAt: { type: DataTypes.DATE, allowNull: true },
+				sessionVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
 				createdAt: DataTypes.DATE,
 				updatedAt: DataTypes.DATE
 			},

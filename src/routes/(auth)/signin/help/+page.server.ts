@@ -1,6 +1,6 @@
 import { fail } from '@sveltejs/kit';
 import { linkRequestSchema } from '$lib/schemas/access';
-import { safeRedirectPath } from '$lib/schemas/auth';
+import { safeRedirectPath } from '$lib/safe-redirect';
 import { requestPasswordReset, requestSignInLink } from '$lib/server/services/access';
 import { DomainError } from '$lib/server/services/errors';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';

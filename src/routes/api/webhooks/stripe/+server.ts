@@ -2,6 +2,7 @@ import { error, json } from '@sveltejs/kit';
 import type Stripe from 'stripe';
 import { stripe, webhookSecret } from '$lib/server/payments/stripe-client';
 import { applyStripeEvent } from '$lib/server/services/payment-events';
+import { signedTooFarAhead } from '$lib/payments/webhook-signature';
 import type { RequestHandler } from './$types';
 
 /**
@@ -17,6 +18,9 @@ export const POST: RequestHandler = async ({ request }) => {
 		event = stripe().webhooks.constructEvent(body, signature, webhookSecret());
 	} catch {
 		error(400, { message: 'The signature does not match this body.' });
+	}
+	if (signedTooFarAhead(signature, Math.floor(Date.now() / 1000))) {
+		error(400, { message: 'The signature is dated in the future.' });
 	}
 	const { status, outcome } = await applyStripeEvent(event);
 	return json({ received: true, outcome }, { status });

@@ -4,8 +4,12 @@ import { invoiceBalance } from '$lib/server/services/balance';
 import { orHttpError } from '$lib/server/services/errors';
 import type { RequestHandler } from './$types';
 
-/** Issues the balance invoice of a confirmed hire (201); 409 if not confirmed or already invoiced. */
+/**
+ * Issues the balance invoice of a confirmed hire (201). Asked again while the first is still being
+ * recorded: 200 with the same invoice and no second e-mail. 409 if not confirmed or already invoiced.
+ */
 export const POST: RequestHandler = async (event) => {
 	const user = requireCapability(event, 'invoices:issue');
-	return json(await orHttpError(() => invoiceBalance(Number(event.params.id), user)), { status: 201 });
+	const { created, ...outcome } = await orHttpError(() => invoiceBalance(Number(event.params.id), user));
+	return json(outcome, { status: created ? 201 : 200 });
 };
