@@ -4,8 +4,9 @@ import { SignInLink } from './sign-in-link';
 import { User } from './user';
 import { initQuotingModels } from './quoting';
 import { initInventoryModels } from './inventory';
+import { initSiteModels, Site, SiteReceiver } from './site';
 
-export { Client, SignInLink, User };
+export { Client, SignInLink, Site, SiteReceiver, User };
 export * from './quoting';
 export * from './inventory';
 
@@ -20,4 +21,5 @@ export function initModels(sequelize: Sequelize): void {
 
 	initInventoryModels(sequelize);
 	initQuotingModels(sequelize);
+	initSiteModels(sequelize);
 }

@@ -1,0 +1,2 @@
+export * from './model-site';
+export { SITE_CAUTIONS } from './cautions';
