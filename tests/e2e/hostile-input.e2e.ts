@@ -50,6 +50,7 @@ import { csvVerdict, envelopeProblem, jsonVerdict, REFUSALS } from './proof/orac
 import { signInEveryone, type Role, type Sessions } from './proof/people';
 import { rawRequest, type RawAnswer } from './proof/raw-http';
 import { differences, snapshot, type Snapshot } from './proof/snapshot';
+import { siteSchema, siteUpdateSchema } from '../../src/lib/schemas/sites';
 import { discoverEntryPoints } from './proof/routes';
 import { hostileUploads, multipartBody, type HostileUpload } from './proof/uploads';
 
@@ -68,6 +69,9 @@ const TARGETS: Record<string, Target> = {
 	'POST /api/users': { as: 'admin', body: 'json', schema: userCreateSchema },
 	'PATCH /api/users/[id=id]': { as: 'admin', body: 'json', schema: userUpdateSchema },
 	'POST /api/evaluations': { as: 'sales', body: 'json', schema: evaluationRequestSchema },
+	'POST /api/sites': { as: 'sales', body: 'json', schema: siteSchema },
+	'PUT /api/sites/[id=id]': { as: 'sales', body: 'json', schema: siteSchema },
+	'PATCH /api/sites/[id=id]': { as: 'sales', body: 'json', schema: siteUpdateSchema },
 	'POST /api/loudspeakers': { as: 'warehouse', body: 'json', schema: loudspeakerSchema },
 	'PATCH /api/loudspeakers/[id=id]': {
 		as: 'warehouse',
