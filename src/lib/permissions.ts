@@ -66,6 +66,7 @@ export const NAVIGATION: readonly NavItem[] = [
 	{ href: '/', label: 'Overview', capability: 'overview:read' },
 	{ href: '/quotes', label: 'Quotes', capability: 'quotes:read' },
 	{ href: '/bookings', label: 'Going out', capability: 'bookings:read' },
+	{ href: '/sites', label: 'Sites', capability: 'sites:read' },
 	{ href: '/inventory', label: 'Inventory', capability: 'inventory:read' },
 	{ href: '/admin/users', label: 'Users', capability: 'users:manage' },
 	{ href: '/admin/programmes', label: 'Programmes', capability: 'programmes:manage' },
