@@ -29,7 +29,7 @@ const SITES: SiteInput[] = [
 		ground: 'porous', groundFactor: null, aimDeg: 90, positionHeightM: 1.5, allowanceDb: 2, units: 'm',
 		receivers: [
 			{ name: 'Mill Lane houses', x: -120, y: 20, heightM: 4, limitDb: 65, weighting: 'A', bandHz: null, period: '15 min Leq', notes: 'First-floor windows behind the stage' },
-			{ name: 'Park fence', x: -30, y: -25, heightM: 1.5, limitDb: 75, weighting: 'A', bandHz: null, period: '15 min Leq', notes: 'Footpath along the fence behind and beside the stage' },
+			{ name: 'Park fence', x: -40, y: -35, heightM: 1.5, limitDb: 75, weighting: 'A', bandHz: null, period: '15 min Leq', notes: 'Footpath along the fence behind and beside the stage' },
 			{ name: 'St Brannoc’s church', x: 180, y: 260, heightM: 3, limitDb: 75, weighting: 'Z', bandHz: 63, period: '15 min Leq', notes: 'Across the river; a 63 Hz band limit' },
 			{ name: 'Weir Cottages', x: 420, y: -60, heightM: 1.5, limitDb: 80, weighting: 'C', bandHz: null, period: '5 min Leq', notes: 'Past the far end of the field' }
 		]

@@ -8,5 +8,6 @@ describe('display units', () => {
 		expect(shownLength(12.345, 'm')).toBe(12.3);
 		expect(typedLength(100, 'ft')).toBeCloseTo(30.48, 10);
 		expect(typedLength(7, 'm')).toBe(7);
+		expect(shownLength(NaN, 'm')).toBeNull();
 	});
 });

@@ -3,8 +3,9 @@ const FOOT = 0.3048;
 
 export type DisplayUnits = 'm' | 'ft';
 
-/** A length for display, rounded to 0.1 of the unit shown. */
-export function shownLength(metres: number, units: DisplayUnits): number {
+/** A length for display, rounded to 0.1 of the unit shown; null (an empty box) when not a number. */
+export function shownLength(metres: number, units: DisplayUnits): number | null {
+	if (!Number.isFinite(metres)) return null;
 	const value = units === 'ft' ? metres / FOOT : metres;
 	return Math.round(value * 10) / 10;
 }
