@@ -1,11 +1,13 @@
 /**
  * `npm run bench`: sets up its own world (tests/bench/world.ts), measures, tears everything down and
  * prints one table (also written to .data/bench/last.json). Never part of `npm test`.
+ * `npm run bench -- --in-process` measures only the in-process rows (the acoustic model), with no
+ * world, and prints them the same way (written to .data/bench/in-process.json).
  * Ratios compare against a baseline measured in the same run, so runs on different (or busy)
  * machines can still be compared.
  */
 import { fileURLToPath } from 'node:url';
-import { runAcousticsBench } from './acoustics.bench';
+import { acousticsRows, runAcousticsBench } from './acoustics.bench';
 import { httpRows, LOAD, measureHttp } from './http-suite';
 import type { LoadResult } from './http-load';
 import { pageWeight, type PageWeight } from './page-weight';
@@ -15,7 +17,6 @@ import { setUpWorld, tearDownWorld, type World } from './world';
 
 process.chdir(fileURLToPath(new URL('../..', import.meta.url)));
 
-const ACOUSTICS_TARGET = 50_000;
 const PAGE_JS_TARGET_KB = 200;
 const OVERALL_LIMIT_MS = 50 * 60_000;
 const SALES = 'sales@kestrel-yard.test';
@@ -92,15 +93,7 @@ async function main(): Promise<void> {
 			unit: 's'
 		},
 		{ metric: 'app boot (node build → /api/health 200)', value: world.bootS, unit: 's' },
-		{
-			metric: 'acoustic evaluations (evaluatePackage, 1 core)',
-			value: acoustics.opsPerSec,
-			unit: '/s',
-			baseline: acoustics.baselineOpsPerSec,
-			ratio: acoustics.ratio,
-			target: `≥ ${ACOUSTICS_TARGET.toLocaleString('en-GB')}/s`,
-			ok: acoustics.opsPerSec >= ACOUSTICS_TARGET
-		},
+		...acousticsRows(acoustics),
 		...httpRows(load, notes),
 		...pages.map((p) => ({
 			metric: `JS for ${p.path}${p.finalPath !== p.path ? ` (→ ${p.finalPath})` : ''} as ${p.role.split('@')[0]}, ${p.modules} modules`,
@@ -143,7 +136,22 @@ async function main(): Promise<void> {
 	console.log('\n(also written to .data/bench/last.json)');
 }
 
-main().then(
+/** Only the rows measured in this process: no database, no app, nothing to tear down. */
+function inProcessOnly(): void {
+	const started = Date.now();
+	log('acoustic model (in this process only)');
+	const acoustics = runAcousticsBench();
+	const rows = acousticsRows(acoustics);
+	console.log(
+		`\nThrowline bench, in-process rows — ${new Date().toISOString()} (${((Date.now() - started) / 1000).toFixed(0)} s)\n`
+	);
+	console.log(formatTable(rows));
+	console.log('\n· acoustics baseline = sumLevels over 9 values, measured in this run');
+	writeJson('.data/bench/in-process.json', { at: new Date().toISOString(), rows, acoustics });
+	console.log('\n(also written to .data/bench/in-process.json)');
+}
+
+(process.argv.includes('--in-process') ? Promise.resolve().then(inProcessOnly) : main()).then(
 	() => process.exit(0),
 	async (err: unknown) => {
 		console.error('[bench] failed:', err instanceof Error ? err.message : err);

@@ -6,6 +6,7 @@
  */
 import { BAND_COUNT, EXACT_BAND_FREQUENCIES_HZ } from './bands';
 import { fail, requireFinite } from './errors';
+import { speedOfSound } from './units';
 import type { Air } from './types';
 
 /** Reference ambient pressure p_r, kPa. */
@@ -64,28 +65,45 @@ export function airAbsorption(frequencyHz: number, air: Air): number {
 	);
 }
 
-// One-entry cache: a quote evaluates every package under the same air, so the nine band
-// coefficients are computed once per change of weather rather than once per package.
+/** What the model needs from the air: α per band (dB/m) and 1/c (s/m). Shared: do not mutate. */
+export interface AirConstants {
+	alphas: Float64Array;
+	inverseC: number;
+}
+
+// One-entry cache: a quote evaluates every package (and a map every point) under the same air, so
+// the nine band coefficients are computed, and the air checked, once per change of weather.
 let cachedTemperatureC = Number.NaN;
 let cachedHumidityPct = Number.NaN;
 let cachedPressureKPa = Number.NaN;
-let cachedBands = new Float64Array(BAND_COUNT);
+let cached: AirConstants = { alphas: new Float64Array(BAND_COUNT), inverseC: Number.NaN };
+
+/**
+ * α at each exact octave mid-band frequency and 1/c for this air, checked (throws on impossible
+ * air) the first time these values are seen. The result is shared: do not mutate it.
+ */
+export function airConstants(air: Air): AirConstants {
+	if (air !== null && typeof air === 'object') {
+		const pressureKPa = air.pressureKPa ?? REFERENCE_PRESSURE_KPA;
+		if (
+			air.temperatureC === cachedTemperatureC &&
+			air.humidityPct === cachedHumidityPct &&
+			pressureKPa === cachedPressureKPa
+		)
+			return cached;
+	}
+	const checked = normaliseAir(air);
+	const alphas = new Float64Array(BAND_COUNT);
+	for (let i = 0; i < BAND_COUNT; i++)
+		alphas[i] = airAbsorption(EXACT_BAND_FREQUENCIES_HZ[i], checked);
+	cached = { alphas, inverseC: 1 / speedOfSound(checked.temperatureC) };
+	cachedTemperatureC = checked.temperatureC;
+	cachedHumidityPct = checked.humidityPct;
+	cachedPressureKPa = checked.pressureKPa;
+	return cached;
+}
 
 /** α (dB/m) at each exact octave mid-band frequency. The returned array is shared: do not mutate it. */
 export function bandAbsorption(air: Air): Float64Array {
-	const pressureKPa = air.pressureKPa ?? REFERENCE_PRESSURE_KPA;
-	if (
-		air.temperatureC !== cachedTemperatureC ||
-		air.humidityPct !== cachedHumidityPct ||
-		pressureKPa !== cachedPressureKPa
-	) {
-		const bands = new Float64Array(BAND_COUNT);
-		for (let i = 0; i < BAND_COUNT; i++)
-			bands[i] = airAbsorption(EXACT_BAND_FREQUENCIES_HZ[i], air);
-		cachedBands = bands;
-		cachedTemperatureC = air.temperatureC;
-		cachedHumidityPct = air.humidityPct;
-		cachedPressureKPa = pressureKPa;
-	}
-	return cachedBands;
+	return airConstants(air).alphas;
 }

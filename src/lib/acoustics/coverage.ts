@@ -1,16 +1,17 @@
 /**
- * Coverage of the audience width (contract step 6). Only full-range cabinets and line-array
+ * Coverage of the audience width (contract step 6, v2). Only full-range cabinets and line-array
  * elements spread the programme across the audience; subwoofers and monitors do not count.
- * Each stack covers 2·d·tan(dispersionH/2) at distance d (its −6 dB angle), unbounded from 180° up,
- * and the widths of all stacks add (the contract's simplification: no overlap is subtracted).
+ * Stacks aimed at one audience do not add: the width is the widest group's 2·d·tan(dispersionH/2)
+ * (unbounded from 180° up), plus spacingM when the group has more than one stack.
  * ok = width ≥ audienceWidthM, allowing for floating-point rounding.
  */
-import type { CoverageResult, LoudspeakerKind } from './types';
+import type { CoverageResult } from './types';
 
 export interface CoveringGroup {
-	kind: LoudspeakerKind;
-	stacks: number;
-	spec: { loudspeaker: { dispersionHDeg: number } };
+	/** 2·tan(dispersionH/2) (∞ from 180°) for full-range and line arrays, 0 for the others. */
+	coverageWidthAt1m: number;
+	/** spacingM when there is more than one stack, else 0. */
+	coverageSpacingM: number;
 }
 
 export function stackCoverageWidthM(dispersionHDeg: number, distanceM: number): number {
@@ -25,8 +26,9 @@ export function coverageAt(
 ): CoverageResult {
 	let widthM = 0;
 	for (const g of groups) {
-		if (g.kind !== 'full-range' && g.kind !== 'line-array-element') continue;
-		widthM += g.stacks * stackCoverageWidthM(g.spec.loudspeaker.dispersionHDeg, distanceM);
+		if (g.coverageWidthAt1m === 0) continue;
+		const width = g.coverageWidthAt1m * distanceM + g.coverageSpacingM;
+		if (width > widthM) widthM = width;
 	}
 	// No audience width asked for: nothing to fail, so coverage is reported but counts as ok.
 	if (audienceWidthM === undefined) return { widthM, audienceWidthM: null, ok: true };

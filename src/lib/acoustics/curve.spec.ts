@@ -3,7 +3,8 @@ import { airAbsorption } from './absorption';
 import { MODEL_ASSUMPTIONS } from './assumptions';
 import { levelAtDistance, levelCurve } from './curve';
 import { evaluatePackage } from './evaluate';
-import { FLAT_OCTAVES, group, request } from './spec-fixtures';
+import { levelGrid } from './grid';
+import { FLAT_OCTAVES, group, request } from '../../../tests/helpers/acoustics/fixtures';
 import { feetToMetres } from './units';
 import type { PackageSpec } from './types';
 
@@ -68,6 +69,34 @@ describe('levelCurve / levelAtDistance: the package driven as in contract step 8
 	});
 });
 
+describe('levelCurve is the v2 model on axis without a site', () => {
+	const r = request({ targetDb: 98, weighting: 'A', distanceM: 25, programme: FLAT_OCTAVES });
+
+	it('equals levelGrid along the axis of an unsited grid (aim north, heights equal, no ground)', () => {
+		const grid = levelGrid(subsAndHang, r, {
+			xMinM: 0,
+			xMaxM: 0,
+			yMinM: 5,
+			yMaxM: 405,
+			stepM: 50,
+			weighting: 'A'
+		});
+		const curve = levelCurve(
+			subsAndHang,
+			r,
+			Array.from({ length: grid.ny }, (_, j) => 5 + 50 * j)
+		);
+		curve.forEach((point, j) => expect(grid.levels[j]).toBeCloseTo(point.levels.A, 9));
+	});
+
+	it("ignores the request's site (the chart stays the free-field axis)", () => {
+		const site = { aimDeg: 90, groundFactor: 1, allowanceDb: 6, receivers: [] };
+		expect(levelAtDistance(subsAndHang, { ...r, site }, 200)).toEqual(
+			levelAtDistance(subsAndHang, r, 200)
+		);
+	});
+});
+
 describe('MODEL_ASSUMPTIONS', () => {
 	it('states every caveat the UI must show beside a prediction', () => {
 		const text = MODEL_ASSUMPTIONS.join(' ');
@@ -80,7 +109,14 @@ describe('MODEL_ASSUMPTIONS', () => {
 			/hearing-safety/i,
 			/line arrays/i,
 			/factor of two/i,
-			/off the centreline/i
+			/off the centreline/i,
+			/ISO 9613-2/,
+			/downwind/i,
+			/deliberately cautious/i,
+			/polar data/i,
+			/barriers, buildings, reflections, delay towers and curved-array/i,
+			/more than the allowance/i,
+			/licensed practice/i
 		]) {
 			expect(text).toMatch(phrase);
 		}

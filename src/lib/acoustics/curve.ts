@@ -3,15 +3,15 @@
  * that the position at request.distanceM receives exactly Q_b in every band it covers — and the
  * continuous level that drive produces is reported at each distance in A, C and Z weighting.
  * By construction the curve passes through request.targetDb (in request.weighting) at the position
- * and through boundary.predictedDb at the boundary distance. It is the level the programme would
+ * and, without a site, through boundary.predictedDb at the boundary distance. It is the level the programme would
  * reach when run at the target, not the package's maximum: compare with Evaluation.headroomDb for that.
  */
-import { bandAbsorption, normaliseAir } from './absorption';
 import { BAND_COUNT } from './bands';
-import { drivenWeightedLevelDb } from './drive';
-import { fillCapabilities, preparePackage } from './groups';
-import { checkDistance, checkRequest, requirementFor } from './requirement';
-import { speedOfSound } from './units';
+import { drivePackage } from './drive';
+import { drivenLevel, fillEnergy } from './field';
+import { preparePackage } from './groups';
+import { checkDistance, checkRequest } from './requirement';
+import { BAND_WEIGHTINGS_DB } from './weighting';
 import type { PackageSpec, QuoteRequest, Weighting } from './types';
 
 export type WeightedLevels = Record<Weighting, number>;
@@ -22,33 +22,26 @@ export interface LevelPoint {
 	levels: WeightedLevels;
 }
 
-/** The driven level at each distance (metres, each positive and finite). */
+/**
+ * The driven level at each distance (metres, each positive and finite), free field on the system's
+ * axis (contract step 3): a site in the request is not applied here, so the curve is the v2 model
+ * without a site; receivers and levelGrid give the levels on a site.
+ */
 export function levelCurve(
 	pkg: PackageSpec,
 	request: QuoteRequest,
 	distancesM: readonly number[]
 ): LevelPoint[] {
 	checkRequest(request);
-	const air = normaliseAir(request.air);
-	const groups = preparePackage(pkg);
-	const requirement = requirementFor(request.programme, request.targetDb, request.weighting);
-	const alphas = bandAbsorption(air);
-	const c = speedOfSound(air.temperatureC);
-	const atPosition = new Float64Array(BAND_COUNT);
-	const atDistance = new Float64Array(BAND_COUNT);
-	const unusedPeak = new Float64Array(BAND_COUNT);
-	fillCapabilities(groups, request.distanceM, alphas, c, atPosition, unusedPeak);
+	const prepared = preparePackage(pkg);
+	const driven = drivePackage(prepared, request, null);
+	const energy = new Float64Array(BAND_COUNT);
+	const at = (rRef: number, w: Weighting) =>
+		drivenLevel(energy, driven.drive, BAND_WEIGHTINGS_DB[w], driven.env.alphas, rRef);
 	return distancesM.map((distanceM) => {
 		checkDistance(distanceM, 'Chart distance');
-		fillCapabilities(groups, distanceM, alphas, c, atDistance, unusedPeak);
-		return {
-			distanceM,
-			levels: {
-				A: drivenWeightedLevelDb(requirement, atPosition, atDistance, 'A'),
-				C: drivenWeightedLevelDb(requirement, atPosition, atDistance, 'C'),
-				Z: drivenWeightedLevelDb(requirement, atPosition, atDistance, 'Z')
-			}
-		};
+		const rRef = fillEnergy(prepared.groups, driven.env, distanceM, 0, 0, energy, null, null);
+		return { distanceM, levels: { A: at(rRef, 'A'), C: at(rRef, 'C'), Z: at(rRef, 'Z') } };
 	});
 }
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { AcousticsInputError } from './errors';
 import { evaluatePackage } from './evaluate';
-import { amplifier, group, request } from './spec-fixtures';
+import { amplifier, group, request } from '../../../tests/helpers/acoustics/fixtures';
 import type { GroupSpec, QuoteRequest, Weighting } from './types';
 
 const evaluate =

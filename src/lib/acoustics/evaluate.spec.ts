@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { airAbsorption } from './absorption';
 import { aWeighting } from './weighting';
 import { evaluatePackage } from './evaluate';
-import { FLAT_OCTAVES, amplifier, group, request } from './spec-fixtures';
+import { FLAT_OCTAVES, amplifier, group, request } from '../../../tests/helpers/acoustics/fixtures';
 import { sumLevels } from './levels';
 import { speedOfSound } from './units';
 import type { GroupSpec, QuoteRequest } from './types';
@@ -24,7 +24,8 @@ describe('evaluatePackage: one Holt cabinet (92 dB/1 W/1 m, 160 W), 1 kHz progra
 		expect(band.requiredDb).toBeCloseTo(90, 12);
 		expect(band.requiredPeakDb).toBeCloseTo(90, 12);
 		expect(band.capabilityDb).toBeCloseTo(expectedCapability, 12);
-		expect(band.capabilityPeakDb).toBeCloseTo(expectedCapability, 12);
+		// v2 step 2: the amplifier's sine rating delivers peaks of 2·P_cab (+3.01 dB, peak of a sine).
+		expect(band.capabilityPeakDb).toBeCloseTo(expectedCapability + 10 * Math.log10(2), 12);
 		expect(band.headroomDb).toBeCloseTo(expectedCapability - 90, 12);
 	});
 
@@ -157,8 +158,12 @@ describe('step 5: limitedBy', () => {
 		).toBe('max-spl');
 	});
 
-	it('peak side wins a tie: continuous thermal (P_cab = rating) vs peak amplifier, crest 0 → amplifier', () => {
-		expect(one(group({}, { powerContinuousW: 160 }), crest(0)).limitedBy).toBe('amplifier');
+	it('peak side wins a tie: continuous thermal (P_cab = rating) vs peak amplifier, crest 3.01 dB → amplifier', () => {
+		// v2: peak capability is +10·lg 2 above continuous here, so a 10·lg 2 crest factor ties the sides.
+		expect(one(group({}, { powerContinuousW: 160 }), crest(10 * Math.log10(2))).limitedBy).toBe(
+			'amplifier'
+		);
+		expect(one(group({}, { powerContinuousW: 160 }), crest(0)).limitedBy).toBe('thermal');
 	});
 
 	it('names the group contributing most in the limiting band, whatever its place in the package', () => {

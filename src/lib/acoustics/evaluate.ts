@@ -1,38 +1,30 @@
-/** evaluatePackage: contract steps 1–8 in order. See index.ts for the method and its limits. */
-import { bandAbsorption, normaliseAir } from './absorption';
-import { amplifierNeeds } from './amplifiers';
+/** evaluatePackage: contract steps 1–9 in order. See index.ts for the method and its limits. */
 import { BAND_COUNT, NOMINAL_BAND_CENTRES_HZ } from './bands';
 import { coverageAt } from './coverage';
-import { drivenWeightedLevelDb } from './drive';
-import { fillCapabilities, groupOffsetDb, preparePackage, type PreparedGroup } from './groups';
-import { DEFAULT_MARGIN_DB, checkRequest, requirementFor, type Requirement } from './requirement';
-import { speedOfSound } from './units';
+import { drivePackage, type DrivenPackage } from './drive';
+import { preparePackage, type PreparedGroup } from './groups';
+import { boundaryPrediction, limitsOf, outcomeOf, receiverPredictions } from './receivers';
+import { DEFAULT_MARGIN_DB, checkRequest } from './requirement';
+import { checkSite } from './site';
 import type {
 	BandResult,
-	Boundary,
-	BoundaryResult,
 	CapabilityLimit,
 	Evaluation,
 	LimitedBy,
-	LimitsResult,
-	Outcome,
 	PackageSpec,
 	QuoteRequest,
 	Verdict
 } from './types';
 
+const NO_RECEIVERS: never[] = [];
+
 export function evaluatePackage(pkg: PackageSpec, request: QuoteRequest): Evaluation {
 	checkRequest(request);
-	const air = normaliseAir(request.air);
-	const groups = preparePackage(pkg);
-	const requirement = requirementFor(request.programme, request.targetDb, request.weighting);
-	const alphas = bandAbsorption(air);
-	const c = speedOfSound(air.temperatureC);
-	const distanceM = request.distanceM;
-
-	const continuous = new Float64Array(BAND_COUNT);
-	const peak = new Float64Array(BAND_COUNT);
-	fillCapabilities(groups, distanceM, alphas, c, continuous, peak);
+	const site = request.site === undefined ? null : checkSite(request.site);
+	const prepared = preparePackage(pkg);
+	const groups = prepared.groups;
+	const driven = drivePackage(prepared, request, site);
+	const { requirement, continuousDb: continuous, peakDb: peak } = driven;
 
 	// Step 5: per-band headroom; the lowest band wins a tie because the scan is ascending and strict.
 	const crest = requirement.crestFactorDb;
@@ -45,7 +37,7 @@ export function evaluatePackage(pkg: PackageSpec, request: QuoteRequest): Evalua
 		const requiredDb = requirement.requiredDb[n];
 		const peakHeadroom = peak[b] - (requiredDb + crest);
 		const continuousHeadroom = continuous[b] - requiredDb;
-		const bandHeadroom = Math.min(peakHeadroom, continuousHeadroom);
+		const bandHeadroom = peakHeadroom < continuousHeadroom ? peakHeadroom : continuousHeadroom;
 		bands[n] = {
 			hz: NOMINAL_BAND_CENTRES_HZ[b],
 			requiredDb,
@@ -63,99 +55,63 @@ export function evaluatePackage(pkg: PackageSpec, request: QuoteRequest): Evalua
 	let limitedBy: LimitedBy =
 		continuous[limitingBand] === -Infinity
 			? 'no-coverage'
-			: bindingLimit(groups, limitingBand, limitingSide, distanceM, alphas[limitingBand], c);
+			: bindingLimit(groups, driven, limitingBand, limitingSide);
 
-	// Steps 6 and 7.
-	const coverage = coverageAt(groups, distanceM, request.audienceWidthM);
+	// Steps 6 and 7. Coverage at the horizontal distance to the position (dispersion spreads in plan).
+	const coverage = coverageAt(groups, request.distanceM, request.audienceWidthM);
 	const marginDb = request.marginDb ?? DEFAULT_MARGIN_DB;
 	const verdict: Verdict =
 		!coverage.ok || headroomDb < 0 ? 'short' : headroomDb >= marginDb ? 'clear' : 'tight';
 	if (!coverage.ok && headroomDb >= 0) limitedBy = 'coverage';
 
+	// Steps 8 and 9.
 	const boundary = request.boundary
-		? boundaryPrediction(
-				groups,
-				requirement,
-				continuous,
-				request.targetDb,
-				request.boundary,
-				alphas,
-				c
-			)
+		? boundaryPrediction(groups, driven, site, request.targetDb, request.boundary)
 		: null;
-	// Step 9 without a site: the boundary is the only limit.
-	const limits: LimitsResult = boundary
-		? { ok: boundary.marginDb >= 0, maxTargetDb: boundary.maxTargetDb, bindingReceiver: 'boundary' }
-		: { ok: true, maxTargetDb: null, bindingReceiver: null };
-	const outcome: Outcome = verdict === 'short' ? 'short' : limits.ok ? verdict : 'over-limit';
+	const receivers =
+		site === null || site.receivers.length === 0
+			? NO_RECEIVERS
+			: receiverPredictions(groups, driven, site, request.targetDb);
+	const limits = limitsOf(receivers, boundary);
 	return {
 		headroomDb,
 		verdict,
 		limitingBandHz: NOMINAL_BAND_CENTRES_HZ[limitingBand],
 		limitedBy,
 		bands,
-		...amplifierNeeds(pkg.groups),
+		amplifierChannelsNeeded: prepared.amplifierChannelsNeeded,
+		amplifiersNeeded: prepared.amplifiersNeeded,
 		coverage,
 		boundary,
-		receivers: [],
+		receivers: receivers === NO_RECEIVERS ? [] : receivers,
 		limits,
-		outcome
+		outcome: outcomeOf(verdict, limits)
 	};
 }
 
 /**
  * What binds in the limiting band: among the groups covering it, the one contributing the most
- * to the binding side's capability (the first in package order on a tie), and that group's limit.
+ * to the binding side's capability at the position (the first in package order on a tie), and
+ * that group's limit.
  */
 function bindingLimit(
 	groups: readonly PreparedGroup[],
+	driven: DrivenPackage,
 	band: number,
-	side: 'peak' | 'continuous',
-	distanceM: number,
-	alphaDbPerM: number,
-	c: number
+	side: 'peak' | 'continuous'
 ): CapabilityLimit {
 	let loudest: PreparedGroup | undefined;
-	let loudestDb = -Infinity;
-	for (const g of groups) {
+	let loudestEnergy = -1;
+	for (let j = 0; j < groups.length; j++) {
+		const g = groups[j];
 		if (g.covers[band] === 0) continue;
-		const level =
-			(side === 'peak' ? g.peakDb : g.continuousDb) +
-			groupOffsetDb(g, band, distanceM, alphaDbPerM, c);
-		if (loudest === undefined || level > loudestDb) {
+		const atOneMetre = side === 'peak' ? g.peakEnergyAt1m[band] : g.continuousEnergyAt1m[band];
+		const energy = atOneMetre * driven.contributions[j * BAND_COUNT + band];
+		if (energy > loudestEnergy) {
 			loudest = g;
-			loudestDb = level;
+			loudestEnergy = energy;
 		}
 	}
 	// The caller checked the band is covered, so a group was found.
 	return side === 'peak' ? loudest!.peakLimit : loudest!.continuousLimit;
-}
-
-/** Step 8: the level at the boundary with the package driven to give exactly Q_b at the position. */
-function boundaryPrediction(
-	groups: readonly PreparedGroup[],
-	requirement: Requirement,
-	continuousAtPosition: Float64Array,
-	targetDb: number,
-	boundary: Boundary,
-	alphas: Float64Array,
-	c: number
-): BoundaryResult {
-	const continuousAtBoundary = new Float64Array(BAND_COUNT);
-	const peakAtBoundary = new Float64Array(BAND_COUNT);
-	fillCapabilities(groups, boundary.distanceM, alphas, c, continuousAtBoundary, peakAtBoundary);
-	const predictedDb = drivenWeightedLevelDb(
-		requirement,
-		continuousAtPosition,
-		continuousAtBoundary,
-		boundary.weighting
-	);
-	const marginDb = boundary.limitDb - predictedDb;
-	return {
-		predictedDb,
-		limitDb: boundary.limitDb,
-		weighting: boundary.weighting,
-		marginDb,
-		maxTargetDb: targetDb + marginDb
-	};
 }

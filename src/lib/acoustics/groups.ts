@@ -1,10 +1,27 @@
 /**
- * Turns each GroupSpec into the few numbers the hot loop needs (capability at 1 m, stacking gain,
- * covered bands, array length), and applies the contract's group laws (step 3) at any distance.
+ * Turns each GroupSpec into the numbers the hot loop needs, per band: whole-group energy at 1 m
+ * (capability, band response and stacking gain), covered bands, the line-array transition, the
+ * source-height ground terms and the prepared directivity. A package is prepared once and kept by
+ * object identity (preparePackage), so quoting many requests against it repeats none of this.
  */
-import { BAND_COUNT, EXACT_BAND_FREQUENCIES_HZ, NOMINAL_BAND_CENTRES_HZ } from './bands';
-import { fail, requirePositive, requireWholeCount } from './errors';
-import { lineSourceDivergenceDb, lineSourceTransitionM, pointSourceDivergenceDb } from './levels';
+import { amplifierNeeds } from './amplifiers';
+import {
+	BAND_COUNT,
+	EXACT_BAND_FREQUENCIES_HZ,
+	NOMINAL_BAND_CENTRES_HZ,
+	bandIndexOf
+} from './bands';
+import { stackCoverageWidthM } from './coverage';
+import { prepareDirectivity, type PreparedDirectivity } from './directivity';
+import {
+	describe,
+	fail,
+	requireFinite,
+	requirePositive,
+	requireWholeCount,
+	type Description
+} from './errors';
+import { heightTerms, type HeightTerms } from './ground';
 import {
 	cabinetCapability,
 	checkAmplifier,
@@ -27,14 +44,34 @@ export interface PreparedGroup extends CabinetCapability {
 	stacks: number;
 	/** Level gain of the whole group over one cabinet, before divergence (dB). */
 	stackingGainDb: number;
-	/** Whole-group energy at 1 m before divergence, 10^((C1 + stacking gain)/10), and the same for P1. */
-	continuousEnergyAt1m: number;
-	peakEnergyAt1m: number;
+	/** Per band: whole-group energy at 1 m, 10^((C1 + response_b + stacking gain)/10); 0 where not covered. */
+	continuousEnergyAt1m: Float64Array;
+	/** The same for P1. */
+	peakEnergyAt1m: Float64Array;
 	/** H = count·heightM for line arrays, else 0. */
 	arrayLengthM: number;
+	/** Per band H²·f_b/2: the transition distance d_t times c (0 for point sources). */
+	transitionTimesC: Float64Array;
+	isLineArray: boolean;
 	/** 1 where lowHz ≤ nominal centre ≤ highHz. */
 	covers: Uint8Array;
+	/** Acoustic centre above ground (default 1.5 m) and its ISO 9613-2 height terms. */
+	heightM: number;
+	groundTerms: HeightTerms;
+	directivity: PreparedDirectivity;
+	/** Width covered at 1 m (2·tan(dispersionH/2), ∞ from 180°) for full-range and line arrays, else 0. */
+	coverageWidthAt1m: number;
+	/** spacingM when there is more than one stack, else 0. */
+	coverageSpacingM: number;
 }
+
+export interface PreparedPackage {
+	groups: PreparedGroup[];
+	amplifierChannelsNeeded: number;
+	amplifiersNeeded: number;
+}
+
+export const DEFAULT_GROUP_HEIGHT_M = 1.5;
 
 export function groupLabel(index: number, kind: unknown): string {
 	return `Group ${index + 1} (${String(kind)})`;
@@ -87,8 +124,27 @@ export function prepareGroup(group: GroupSpec, index: number): PreparedGroup {
 	const covers = new Uint8Array(BAND_COUNT);
 	for (let i = 0; i < BAND_COUNT; i++)
 		covers[i] = lowHz <= NOMINAL_BAND_CENTRES_HZ[i] && NOMINAL_BAND_CENTRES_HZ[i] <= highHz ? 1 : 0;
+	const heightM = optionalNonNegative(
+		group.heightM,
+		label,
+		'height above ground (m)',
+		DEFAULT_GROUP_HEIGHT_M
+	);
+	const spacingM = optionalNonNegative(group.spacingM, label, 'spacing between stacks (m)', 0);
+	const response = bandResponse(spec.bandResponseDb, label);
+	const directivity = prepareDirectivity(group, label);
 	const gainDb = stackingGainDb(spec.kind, count, stacks);
 	const capability = cabinetCapability(spec, group.amplifier, perChannel, label);
+	const continuousEnergyAt1m = new Float64Array(BAND_COUNT);
+	const peakEnergyAt1m = new Float64Array(BAND_COUNT);
+	const transitionTimesC = new Float64Array(BAND_COUNT);
+	for (let b = 0; b < BAND_COUNT; b++) {
+		if (covers[b] === 0) continue;
+		continuousEnergyAt1m[b] = Math.pow(10, (capability.continuousDb + response[b] + gainDb) / 10);
+		peakEnergyAt1m[b] = Math.pow(10, (capability.peakDb + response[b] + gainDb) / 10);
+		transitionTimesC[b] = (arrayLengthM * arrayLengthM * EXACT_BAND_FREQUENCIES_HZ[b]) / 2;
+	}
+	const spreads = spec.kind === 'full-range' || spec.kind === 'line-array-element';
 	// Fields listed one by one (no spread) so every prepared group shares one object shape.
 	return {
 		powerPerCabinetW: capability.powerPerCabinetW,
@@ -101,77 +157,81 @@ export function prepareGroup(group: GroupSpec, index: number): PreparedGroup {
 		count,
 		stacks,
 		stackingGainDb: gainDb,
-		continuousEnergyAt1m: Math.pow(10, (capability.continuousDb + gainDb) / 10),
-		peakEnergyAt1m: Math.pow(10, (capability.peakDb + gainDb) / 10),
+		continuousEnergyAt1m,
+		peakEnergyAt1m,
 		arrayLengthM,
-		covers
+		transitionTimesC,
+		isLineArray: spec.kind === 'line-array-element',
+		covers,
+		heightM,
+		groundTerms: heightTerms(heightM),
+		directivity,
+		coverageWidthAt1m: spreads ? stackCoverageWidthM(dispersion, 1) : 0,
+		coverageSpacingM: spreads && stacks > 1 ? spacingM : 0
 	};
 }
 
-export function preparePackage(pkg: PackageSpec): PreparedGroup[] {
+function optionalNonNegative(
+	value: number | undefined,
+	label: Description,
+	field: string,
+	fallback: number
+): number {
+	if (value === undefined) return fallback;
+	const n = requireFinite(value, label, field);
+	if (n < 0) fail(`${describe(label, field)} cannot be negative (got ${n}).`);
+	return n;
+}
+
+/** Per band output re the sensitivity (dB), 0 where absent; refuses keys that are not bands. */
+function bandResponse(
+	response: Partial<Record<number, number>> | undefined,
+	label: Description
+): Float64Array {
+	const out = new Float64Array(BAND_COUNT);
+	if (response === undefined) return out;
+	if (response === null || typeof response !== 'object')
+		fail(`${describe(label)}: band response must map octave bands to dB.`);
+	for (const key of Object.keys(response)) {
+		const value = response[key as unknown as number];
+		if (value === undefined) continue;
+		const b = bandIndexOf(Number(key));
+		if (b < 0)
+			fail(
+				`${describe(label)}: band response "${key}" is not one of the model's octave bands; use ${NOMINAL_BAND_CENTRES_HZ.join(', ')} (Hz).`
+			);
+		out[b] = requireFinite(value, label, `band response at ${key} Hz (dB)`);
+	}
+	return out;
+}
+
+interface CacheEntry {
+	groupsRef: readonly unknown[];
+	groupRefs: unknown[];
+	prepared: PreparedPackage;
+}
+
+const PREPARED = new WeakMap<object, CacheEntry>();
+
+/**
+ * The package prepared for evaluation, kept by object identity: a package evaluated against many
+ * requests (every request of a quote, every grid point, a bench) is checked and prepared once.
+ * The cache is also dropped when the groups list or one of its group objects is replaced; a group
+ * whose fields are edited in place must be replaced by a new object to be seen (documented in index.ts).
+ */
+export function preparePackage(pkg: PackageSpec): PreparedPackage {
 	if (pkg === null || typeof pkg !== 'object' || !Array.isArray(pkg.groups))
 		fail('Package must have a list of groups.');
-	return pkg.groups.map(prepareGroup);
+	const cached = PREPARED.get(pkg);
+	if (cached !== undefined && sameGroups(cached, pkg.groups)) return cached.prepared;
+	const groups = pkg.groups.map(prepareGroup);
+	const prepared: PreparedPackage = { groups, ...amplifierNeeds(pkg.groups) };
+	PREPARED.set(pkg, { groupsRef: pkg.groups, groupRefs: [...pkg.groups], prepared });
+	return prepared;
 }
 
-/**
- * Level of one group in band `band` at distance x relative to its per-cabinet 1 m capability:
- * add C1 (or P1) to get the group's level. Step 3 of the contract, air absorption included.
- */
-export function groupOffsetDb(
-	g: PreparedGroup,
-	band: number,
-	distanceM: number,
-	alphaDbPerM: number,
-	speedOfSound: number
-): number {
-	const divergence =
-		g.kind === 'line-array-element'
-			? lineSourceDivergenceDb(
-					distanceM,
-					lineSourceTransitionM(g.arrayLengthM, EXACT_BAND_FREQUENCIES_HZ[band], speedOfSound)
-				)
-			: pointSourceDivergenceDb(distanceM);
-	return g.stackingGainDb - divergence - alphaDbPerM * distanceM;
-}
-
-/**
- * Package capability (continuous and peak) at distance x in every band: the energy sum over the
- * groups covering each band; −Infinity where none does. Writes into the arrays given.
- * Sums in linear energy, where both divergence laws are algebraic (10^(−20·lg x/10) = 1/x²,
- * 10^(−10·lg(d_t·x)/10) = 1/(d_t·x)), so the inner loop needs no logarithm or power. Air
- * absorption is the same for every group in a band, so it is subtracted in dB after the sum, which
- * also keeps a covered band finite at any distance. Agrees with summing L1 + groupOffsetDb (tested).
- */
-export function fillCapabilities(
-	groups: readonly PreparedGroup[],
-	distanceM: number,
-	alphas: Float64Array,
-	speedOfSound: number,
-	continuousOut: Float64Array,
-	peakOut: Float64Array
-): void {
-	const inverseSquare = 1 / (distanceM * distanceM);
-	for (let b = 0; b < BAND_COUNT; b++) {
-		let continuousEnergy = 0;
-		let peakEnergy = 0;
-		for (let j = 0; j < groups.length; j++) {
-			const g = groups[j];
-			if (g.covers[b] === 0) continue;
-			let spreading = inverseSquare;
-			if (g.kind === 'line-array-element') {
-				const transitionM = lineSourceTransitionM(
-					g.arrayLengthM,
-					EXACT_BAND_FREQUENCIES_HZ[b],
-					speedOfSound
-				);
-				if (transitionM > 1 && distanceM < transitionM) spreading = 1 / (transitionM * distanceM);
-			}
-			continuousEnergy += g.continuousEnergyAt1m * spreading;
-			peakEnergy += g.peakEnergyAt1m * spreading;
-		}
-		const absorptionDb = alphas[b] * distanceM;
-		continuousOut[b] = 10 * Math.log10(continuousEnergy) - absorptionDb;
-		peakOut[b] = 10 * Math.log10(peakEnergy) - absorptionDb;
-	}
+function sameGroups(entry: CacheEntry, groups: readonly unknown[]): boolean {
+	if (entry.groupsRef !== groups || entry.groupRefs.length !== groups.length) return false;
+	for (let i = 0; i < groups.length; i++) if (entry.groupRefs[i] !== groups[i]) return false;
+	return true;
 }

@@ -10,6 +10,10 @@ describe('public surface (names other code and outside checks call)', () => {
 			'airAbsorption',
 			'sumLevels',
 			'evaluatePackage',
+			'levelGrid',
+			'groundAttenuation',
+			'directivityDb',
+			'compareOutcomes',
 			'levelAtDistance',
 			'levelCurve',
 			'feetToMetres',
@@ -22,5 +26,6 @@ describe('public surface (names other code and outside checks call)', () => {
 		expect(acoustics.EXACT_BAND_FREQUENCIES_HZ).toHaveLength(9);
 		expect(acoustics.MODEL_ASSUMPTIONS.length).toBeGreaterThan(0);
 		expect(acoustics.DEFAULT_MARGIN_DB).toBe(3);
+		expect(acoustics.OUTCOME_ORDER).toEqual(['clear', 'tight', 'over-limit', 'short']);
 	});
 });

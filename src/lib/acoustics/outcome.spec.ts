@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { airAbsorption } from './absorption';
 import { evaluatePackage } from './evaluate';
-import { amplifier, group, request } from './spec-fixtures';
+import { amplifier, group, request } from '../../../tests/helpers/acoustics/fixtures';
 import { feetToMetres } from './units';
 import type { GroupSpec, QuoteRequest } from './types';
 
@@ -15,20 +15,35 @@ describe('steps 6 and 7: coverage and verdict', () => {
 	const base = one(group({ stacks: 2 }));
 	const H = base.headroomDb;
 
-	it('two 90° stacks cover 2 × 2·d·tan 45° = 40 m at 10 m; ≥ 180° is unbounded; subwoofers do not count', () => {
-		expect(one(group({ stacks: 2 }), { audienceWidthM: 40 }).coverage).toEqual({
-			widthM: expect.closeTo(40, 9),
-			audienceWidthM: 40,
+	it('v2: two 90° stacks do not add: 2·d·tan 45° = 20 m at 10 m, plus spacingM between the outer stacks', () => {
+		expect(one(group({ stacks: 2 }), { audienceWidthM: 20 }).coverage).toEqual({
+			widthM: expect.closeTo(20, 9),
+			audienceWidthM: 20,
 			ok: true
 		});
+		expect(one(group({ stacks: 2, spacingM: 12 }), { audienceWidthM: 32 }).coverage).toEqual({
+			widthM: expect.closeTo(32, 9),
+			audienceWidthM: 32,
+			ok: true
+		});
+		// spacingM counts only with more than one stack.
+		expect(one(group({ stacks: 1, spacingM: 12 })).coverage.widthM).toBeCloseTo(20, 9);
+	});
+
+	it('v2: the widest group sets the width (max, not sum); ≥ 180° is unbounded; subwoofers and monitors do not count', () => {
+		const narrow = group({}, { dispersionHDeg: 60 });
+		const wide = group({}, { dispersionHDeg: 120 });
+		const r = evaluatePackage({ groups: [narrow, wide] }, request());
+		expect(r.coverage.widthM).toBeCloseTo(2 * 10 * Math.tan(Math.PI / 3), 9);
 		expect(one(group({}, { dispersionHDeg: 180 })).coverage.widthM).toBe(Infinity);
 		expect(one(group({}, { kind: 'subwoofer' }), { audienceWidthM: 1 }).coverage).toEqual({
 			widthM: 0,
 			audienceWidthM: 1,
 			ok: false
 		});
+		expect(one(group({}, { kind: 'monitor' })).coverage.widthM).toBe(0);
 		expect(base.coverage).toEqual({
-			widthM: expect.closeTo(40, 9),
+			widthM: expect.closeTo(20, 9),
 			audienceWidthM: null,
 			ok: true
 		});
@@ -44,12 +59,12 @@ describe('steps 6 and 7: coverage and verdict', () => {
 	});
 
 	it('coverage failing with H ≥ 0 makes the verdict short and limitedBy "coverage"', () => {
-		const r = one(group({ stacks: 2 }), { audienceWidthM: 41 });
+		const r = one(group({ stacks: 2 }), { audienceWidthM: 21 });
 		expect([r.verdict, r.limitedBy, r.limitingBandHz]).toEqual(['short', 'coverage', 1000]);
 	});
 
 	it('with H < 0 the headroom reason stays even when coverage also fails', () => {
-		const r = one(group({ stacks: 2 }), { audienceWidthM: 41, targetDb: 120 });
+		const r = one(group({ stacks: 2 }), { audienceWidthM: 21, targetDb: 120 });
 		expect([r.verdict, r.limitedBy]).toEqual(['short', 'amplifier']);
 	});
 });

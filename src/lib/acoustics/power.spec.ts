@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { cabinetCapability, channelPowerW, sensitivity1WDb } from './power';
-import { amplifier, loudspeaker } from './spec-fixtures';
+import { amplifier, loudspeaker } from '../../../tests/helpers/acoustics/fixtures';
 
 describe('sensitivity and power, worked examples', () => {
 	it('Holt, "How to Calculate Maximum SPL" (Stereophile): 92 dB/1 W/1 m with 160 W → 114 dB at 1 m', () => {
@@ -69,10 +69,43 @@ describe('contract step 1: channel power into the parallel load', () => {
 });
 
 describe('contract step 2: capability at 1 m and what binds it', () => {
-	it('amplifier binds when P_cab is below the rating (continuous and peak)', () => {
+	it('amplifier binds when P_cab is below the rating (continuous) and 2·P_cab below the peak rating (peak)', () => {
 		const c = cabinetCapability(loudspeaker({ powerContinuousW: 500 }), amplifier(), 1, 'test');
 		expect([c.continuousLimit, c.peakLimit]).toEqual(['amplifier', 'amplifier']);
-		expect(c.peakDb).toBe(c.continuousDb);
+		// Peak of a sine: a sine of RMS power P peaks at 2P, +10·lg 2 = +3.01 dB (v2 step 2).
+		expect(c.peakDb - c.continuousDb).toBeCloseTo(10 * Math.log10(2), 12);
+		expect(c.peakDb - c.continuousDb).toBeCloseTo(3.01, 2);
+	});
+
+	it('v2: the peak side is thermal once 2·P_cab reaches the peak rating, while the continuous side is still the amplifier', () => {
+		// 160 W amplifier, 200 W continuous / 320 W peak cabinet: P_cab < 200 but 2·P_cab = 320.
+		const c = cabinetCapability(
+			loudspeaker({ powerContinuousW: 200, powerPeakW: 320 }),
+			amplifier(),
+			1,
+			'test'
+		);
+		expect([c.continuousLimit, c.peakLimit]).toEqual(['amplifier', 'thermal']);
+		expect(c.peakDb).toBeCloseTo(92 + 10 * Math.log10(320), 12);
+	});
+
+	it('v2: power compression lowers the continuous side only; the max SPL cap applies after it', () => {
+		const plain = cabinetCapability(loudspeaker(), amplifier(), 1, 'test');
+		const compressed = cabinetCapability(
+			loudspeaker({ compressionDb: 2.5 }),
+			amplifier(),
+			1,
+			'test'
+		);
+		expect(plain.continuousDb - compressed.continuousDb).toBeCloseTo(2.5, 12);
+		expect(compressed.peakDb).toBe(plain.peakDb);
+		const capped = cabinetCapability(
+			loudspeaker({ compressionDb: 2.5, maxSplContinuousDb: 110 }),
+			amplifier(),
+			1,
+			'test'
+		);
+		expect([capped.continuousDb, capped.continuousLimit]).toEqual([110, 'max-spl']);
 	});
 
 	it('thermal binds when the cabinet rating is smaller; peak rating defaults to 4 × continuous (+6 dB)', () => {
@@ -120,7 +153,7 @@ describe('contract step 2: capability at 1 m and what binds it', () => {
 		expect(loose.continuousLimit).toBe('amplifier');
 	});
 
-	it('ties name the cabinet: P_cab equal to the rating is thermal; max SPL equal to the level is max-spl', () => {
+	it('ties: P_cab equal to the rating is thermal; v2: max-spl only when the cap is strictly lower', () => {
 		const atRating = cabinetCapability(
 			loudspeaker({ powerContinuousW: 160 }),
 			amplifier(),
@@ -131,6 +164,10 @@ describe('contract step 2: capability at 1 m and what binds it', () => {
 		const level = 92 + 10 * Math.log10(160);
 		expect(
 			cabinetCapability(loudspeaker({ maxSplContinuousDb: level }), amplifier(), 1, 'test')
+				.continuousLimit
+		).toBe('amplifier');
+		expect(
+			cabinetCapability(loudspeaker({ maxSplContinuousDb: level - 1e-9 }), amplifier(), 1, 'test')
 				.continuousLimit
 		).toBe('max-spl');
 	});

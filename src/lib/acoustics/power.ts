@@ -83,9 +83,11 @@ export interface CabinetCapability {
 }
 
 /**
- * Step 2. C1 = S + 10·lg(min(P_cab, continuous rating)) then min with max SPL, and the same for peak.
- * On a tie the cabinet's own limit is named (max SPL before thermal before amplifier), because a
- * bigger amplifier would not raise the level.
+ * Step 2 (v2). C1 = S + 10·lg(min(P_cab, continuous rating)) − compressionDb, then min with the
+ * continuous max SPL; P1 = S + 10·lg(min(2·P_cab, peak rating)), then min with the peak max SPL:
+ * an amplifier rated P (sine, RMS) delivers peaks of 2P (+3.01 dB). The amplifier binds when its
+ * power is strictly below the rating, the max SPL when the cap is strictly lower; otherwise thermal.
+ * Per-band response is added later, per band (prepare.ts).
  */
 export function cabinetCapability(
 	spec: LoudspeakerSpec,
@@ -97,8 +99,13 @@ export function cabinetCapability(
 	const powerPerCabinetW = channelPowerW(amp, loadOhm, label) / cabinetsPerChannel;
 	const s1w = sensitivity1WDb(spec);
 	const peakRatingW = spec.powerPeakW ?? 4 * spec.powerContinuousW;
-	const continuous = capped(s1w, powerPerCabinetW, spec.powerContinuousW, spec.maxSplContinuousDb);
-	const peak = capped(s1w, powerPerCabinetW, peakRatingW, spec.maxSplPeakDb);
+	const continuous = capped(
+		s1w - (spec.compressionDb ?? 0),
+		powerPerCabinetW,
+		spec.powerContinuousW,
+		spec.maxSplContinuousDb
+	);
+	const peak = capped(s1w, 2 * powerPerCabinetW, peakRatingW, spec.maxSplPeakDb);
 	return {
 		powerPerCabinetW,
 		continuousDb: continuous.db,
@@ -109,14 +116,14 @@ export function cabinetCapability(
 }
 
 function capped(
-	s1w: number,
+	levelAt1WDb: number,
 	ampW: number,
 	ratingW: number,
 	maxSplDb: number | undefined
 ): { db: number; limit: CapabilityLimit } {
 	const limit: CapabilityLimit = ampW < ratingW ? 'amplifier' : 'thermal';
-	const db = s1w + 10 * Math.log10(Math.min(ampW, ratingW));
-	if (maxSplDb !== undefined && maxSplDb <= db) return { db: maxSplDb, limit: 'max-spl' };
+	const db = levelAt1WDb + 10 * Math.log10(Math.min(ampW, ratingW));
+	if (maxSplDb !== undefined && maxSplDb < db) return { db: maxSplDb, limit: 'max-spl' };
 	return { db, limit };
 }
 
@@ -134,6 +141,11 @@ export function checkLoudspeakerPower(spec: LoudspeakerSpec, label: Description)
 	if (spec.maxSplContinuousDb !== undefined)
 		requireFinite(spec.maxSplContinuousDb, label, 'continuous max SPL (dB)');
 	if (spec.maxSplPeakDb !== undefined) requireFinite(spec.maxSplPeakDb, label, 'peak max SPL (dB)');
+	if (spec.compressionDb !== undefined) {
+		const compression = requireFinite(spec.compressionDb, label, 'power compression (dB)');
+		if (compression < 0)
+			fail(`${describe(label)}: power compression cannot be negative (got ${compression} dB).`);
+	}
 }
 
 function round2(x: number): number {

@@ -13,7 +13,7 @@ import {
 	packageArb,
 	referenceCapabilities,
 	requestArb
-} from './spec-reference';
+} from '../../../tests/helpers/acoustics/reference';
 import type { LoudspeakerKind } from './types';
 
 const close = (actual: number, expected: number, digits = 8) =>

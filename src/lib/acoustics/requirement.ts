@@ -12,7 +12,7 @@ export const DEFAULT_MARGIN_DB = 3;
 
 export interface Requirement {
 	/** Indices (into the band arrays) of the programme's bands, ascending. */
-	bandIndices: number[];
+	bandIndices: readonly number[];
 	/** Q_b, index-aligned with bandIndices: required Leq per band. */
 	requiredDb: number[];
 	crestFactorDb: number;
@@ -53,26 +53,77 @@ export function programmeBandIndices(programme: Programme): number[] {
 	return indices;
 }
 
-/** Q_b for the target in its weighting (step 4). */
-export function requirementFor(
-	programme: Programme,
-	targetDb: number,
-	weighting: Weighting
-): Requirement {
+/** A checked programme: its band indices, relative levels and weighted sums, kept per object. */
+interface CheckedProgramme {
+	bandsRef: object;
+	/** The nine band values as they were when checked (undefined where absent). */
+	snapshot: (number | undefined)[];
+	crestFactorDb: number;
+	bandIndices: number[];
+	relativeDb: number[];
+	/** 10·lg Σ 10^((R_b + W_b)/10) per weighting, filled when first needed. */
+	weightedSumDb: Record<Weighting, number>;
+}
+
+const CHECKED = new WeakMap<object, CheckedProgramme>();
+
+function unchanged(entry: CheckedProgramme, programme: Programme): boolean {
+	if (entry.bandsRef !== programme.bandsDb || entry.crestFactorDb !== programme.crestFactorDb)
+		return false;
+	const bands = programme.bandsDb as Record<number, number | undefined>;
+	for (let i = 0; i < BAND_COUNT; i++)
+		if (bands[NOMINAL_BAND_CENTRES_HZ[i]] !== entry.snapshot[i]) return false;
+	return true;
+}
+
+/**
+ * The programme checked once per object and kept while its nine band values and crest factor are
+ * unchanged (a programme is evaluated against every package of a quote and every grid point).
+ */
+function checkedProgramme(programme: Programme): CheckedProgramme {
+	if (programme !== null && typeof programme === 'object') {
+		const entry = CHECKED.get(programme);
+		if (entry !== undefined && unchanged(entry, programme)) return entry;
+	}
 	const bandIndices = programmeBandIndices(programme);
 	const crestFactorDb = requireFinite(programme.crestFactorDb, 'Programme crest factor (dB)');
 	if (crestFactorDb < 0)
 		fail(
 			`Programme crest factor cannot be negative (got ${crestFactorDb} dB); peak is never below the average.`
 		);
-	const bands = programme.bandsDb as Record<number, number>;
-	const w = BAND_WEIGHTINGS_DB[weighting];
-	let weightedEnergy = 0;
-	for (const i of bandIndices)
-		weightedEnergy += Math.pow(10, (bands[NOMINAL_BAND_CENTRES_HZ[i]] + w[i]) / 10);
-	const offsetDb = targetDb - 10 * Math.log10(weightedEnergy);
-	const requiredDb = bandIndices.map((i) => bands[NOMINAL_BAND_CENTRES_HZ[i]] + offsetDb);
-	return { bandIndices, requiredDb, crestFactorDb };
+	const bands = programme.bandsDb as Record<number, number | undefined>;
+	const entry: CheckedProgramme = {
+		bandsRef: programme.bandsDb,
+		snapshot: NOMINAL_BAND_CENTRES_HZ.map((hz) => bands[hz]),
+		crestFactorDb,
+		bandIndices,
+		relativeDb: bandIndices.map((i) => bands[NOMINAL_BAND_CENTRES_HZ[i]] as number),
+		weightedSumDb: { A: Number.NaN, C: Number.NaN, Z: Number.NaN }
+	};
+	CHECKED.set(programme, entry);
+	return entry;
+}
+
+/** Q_b for the target in its weighting (step 4). */
+export function requirementFor(
+	programme: Programme,
+	targetDb: number,
+	weighting: Weighting
+): Requirement {
+	const checked = checkedProgramme(programme);
+	const { bandIndices, relativeDb } = checked;
+	let sumDb = checked.weightedSumDb[weighting];
+	if (sumDb !== sumDb) {
+		const w = BAND_WEIGHTINGS_DB[weighting];
+		let weightedEnergy = 0;
+		for (let n = 0; n < bandIndices.length; n++)
+			weightedEnergy += Math.pow(10, (relativeDb[n] + w[bandIndices[n]]) / 10);
+		sumDb = checked.weightedSumDb[weighting] = 10 * Math.log10(weightedEnergy);
+	}
+	const offsetDb = targetDb - sumDb;
+	const requiredDb: number[] = new Array(bandIndices.length);
+	for (let n = 0; n < bandIndices.length; n++) requiredDb[n] = relativeDb[n] + offsetDb;
+	return { bandIndices, requiredDb, crestFactorDb: checked.crestFactorDb };
 }
 
 /** Checks every field of a request that the model reads; returns nothing, throws a clear Error. */

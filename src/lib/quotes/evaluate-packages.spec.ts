@@ -24,7 +24,8 @@ const pkg = (id: number, name: string, count: number): LoadedPackage => ({
 });
 
 const input = {
-	targetDb: 95, weighting: 'A' as const, distance: 30, distanceUnit: 'm' as const, programme: 'x',
+	// 98 dB(A): since acoustics v2 (peaks of 2 × the amplifier rating) the one-top package is tight here, not at 95.
+	targetDb: 98, weighting: 'A' as const, distance: 30, distanceUnit: 'm' as const, programme: 'x',
 	temperatureC: 20, humidityPct: 50, startDate: '2027-06-12', endDate: '2027-06-13'
 };
 const programme = { bandsDb: { 125: 0, 250: 0, 500: 0, 1000: 0, 2000: 0, 4000: 0 }, crestFactorDb: 12 };

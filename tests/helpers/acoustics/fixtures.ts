@@ -1,9 +1,15 @@
 /**
- * Builders for the model's unit tests only (not exported from index.ts). The default cabinet is
+ * Builders for the acoustic model's unit tests (src/lib/acoustics/*.spec.ts). The default cabinet is
  * the worked example in J. G. Holt, "How to Calculate Maximum SPL" (Stereophile): 92 dB/1 W/1 m
  * driven with 160 W. Everything else is a round number chosen to make hand arithmetic easy.
  */
-import type { AmplifierSpec, GroupSpec, LoudspeakerSpec, Programme, QuoteRequest } from './types';
+import type {
+	AmplifierSpec,
+	GroupSpec,
+	LoudspeakerSpec,
+	Programme,
+	QuoteRequest
+} from '../../../src/lib/acoustics/types';
 
 export function loudspeaker(overrides: Partial<LoudspeakerSpec> = {}): LoudspeakerSpec {
 	return {

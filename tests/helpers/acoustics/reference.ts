@@ -1,20 +1,23 @@
 /**
- * Test support only (not exported from index.ts): a deliberately plain reference for contract
- * steps 1–3, written straight from the text in decibels, and fast-check generators of packages
- * and requests. The model's optimised code is checked against this in properties.spec.ts.
+ * Test support for src/lib/acoustics: a deliberately plain reference for contract steps 1–3 (v2,
+ * without a site), written straight from the text in decibels, and fast-check generators of
+ * packages and requests. The model's optimised code is checked against this in properties.spec.ts.
  */
 import fc from 'fast-check';
-import { airAbsorption } from './absorption';
-import { sumLevels } from './levels';
-import { speedOfSound } from './units';
+import { airAbsorption } from '../../../src/lib/acoustics/absorption';
+import { sumLevels } from '../../../src/lib/acoustics/levels';
+import { speedOfSound } from '../../../src/lib/acoustics/units';
 import type {
 	Air,
 	AmplifierSpec,
 	GroupSpec,
 	LoudspeakerKind,
+	LoudspeakerSpec,
 	PackageSpec,
-	QuoteRequest
-} from './types';
+	QuoteRequest,
+	Receiver,
+	Site
+} from '../../../src/lib/acoustics/types';
 
 export const CENTRES = [31.5, 63, 125, 250, 500, 1000, 2000, 4000, 8000] as const;
 export const exactHz = (i: number) => 1000 * 10 ** ((3 * (i - 5)) / 10);
@@ -33,9 +36,10 @@ function referencePower(amp: AmplifierSpec, loadOhm: number): number {
 
 export function referenceCapabilities(
 	pkg: PackageSpec,
-	x: number,
+	distanceM: number,
 	air: Air
 ): { continuous: number[]; peak: number[] } {
+	const x = Math.max(distanceM, 1); // any distance below 1 m is taken as 1 m
 	const c = speedOfSound(air.temperatureC);
 	const continuous: number[][] = CENTRES.map(() => []);
 	const peak: number[][] = CENTRES.map(() => []);
@@ -47,17 +51,19 @@ export function referenceCapabilities(
 			s.sensitivityRef === '2.83V'
 				? s.sensitivityDb - 10 * Math.log10(8 / s.impedanceOhm)
 				: s.sensitivityDb;
+		// v2 step 2: compression on the continuous side, peaks of 2·P_cab, then each max SPL cap.
 		const c1 = Math.min(
-			s1w + 10 * Math.log10(Math.min(pCab, s.powerContinuousW)),
+			s1w + 10 * Math.log10(Math.min(pCab, s.powerContinuousW)) - (s.compressionDb ?? 0),
 			s.maxSplContinuousDb ?? Infinity
 		);
 		const p1 = Math.min(
-			s1w + 10 * Math.log10(Math.min(pCab, s.powerPeakW ?? 4 * s.powerContinuousW)),
+			s1w + 10 * Math.log10(Math.min(2 * pCab, s.powerPeakW ?? 4 * s.powerContinuousW)),
 			s.maxSplPeakDb ?? Infinity
 		);
 		const stacks = g.stacks ?? 1;
 		CENTRES.forEach((centre, b) => {
 			if (!(s.lowHz <= centre && centre <= s.highHz)) return;
+			const response = s.bandResponseDb?.[centre] ?? 0;
 			const f = exactHz(b);
 			const absorption = airAbsorption(f, air) * x;
 			let law: number;
@@ -72,8 +78,8 @@ export function referenceCapabilities(
 				if (dt <= 1 || x >= dt) law = gain - 20 * Math.log10(x);
 				else law = gain - 20 * Math.log10(dt) - 10 * Math.log10(x / dt);
 			}
-			continuous[b].push(c1 + law - absorption);
-			peak[b].push(p1 + law - absorption);
+			continuous[b].push(c1 + response + law - absorption);
+			peak[b].push(p1 + response + law - absorption);
 		});
 	}
 	return { continuous: continuous.map(sumLevels), peak: peak.map(sumLevels) };
@@ -112,6 +118,14 @@ export function groupArb(kinds = kindArb): fc.Arbitrary<GroupSpec> {
 			lowHz: fc.constantFrom(20, 30, 45, 60, 100),
 			highHz: fc.constantFrom(120, 200, 8000, 18000, 20000),
 			heightM: fc.double({ min: 0.1, max: 0.6, noNaN: true }),
+			compressionDb: fc.option(fc.double({ min: 0, max: 4, noNaN: true }), { nil: undefined }),
+			bandResponseDb: fc.option(
+				fc.dictionary(
+					fc.constantFrom(...CENTRES.map(String)),
+					fc.double({ min: -12, max: 3, noNaN: true })
+				),
+				{ nil: undefined }
+			),
 			count: fc.integer({ min: 1, max: 16 }),
 			stacks: fc.integer({ min: 1, max: 4 }),
 			perChannel: fc.integer({ min: 1, max: 4 }),
@@ -132,7 +146,9 @@ export function groupArb(kinds = kindArb): fc.Arbitrary<GroupSpec> {
 				dispersionVDeg: 40,
 				lowHz: r.lowHz,
 				highHz: r.highHz,
-				heightM: r.heightM
+				heightM: r.heightM,
+				compressionDb: r.compressionDb,
+				bandResponseDb: r.bandResponseDb as LoudspeakerSpec['bandResponseDb']
 			},
 			count: r.count,
 			stacks: r.stacks,
@@ -172,4 +188,31 @@ export const requestArb: fc.Arbitrary<QuoteRequest> = fc.record({
 		limitDb: fc.double({ min: 40, max: 100, noNaN: true }),
 		weighting: weightingArb
 	})
+});
+
+// ---- v2: sites and receivers ----
+export const receiverArb: fc.Arbitrary<Receiver> = fc.record({
+	name: fc.constantFrom('Fence', 'School', 'Houses', 'Quay'),
+	x: fc.double({ min: -2000, max: 2000, noNaN: true }),
+	y: fc.double({ min: -2000, max: 2000, noNaN: true }),
+	heightM: fc.double({ min: 0, max: 20, noNaN: true }),
+	limitDb: fc.double({ min: 30, max: 100, noNaN: true }),
+	weighting: weightingArb
+});
+
+export const siteArb: fc.Arbitrary<Site> = fc.record({
+	aimDeg: fc.double({ min: -360, max: 720, noNaN: true }),
+	groundFactor: fc.option(fc.double({ min: 0, max: 1, noNaN: true }), { nil: null }),
+	positionHeightM: fc.double({ min: 0, max: 10, noNaN: true }),
+	allowanceDb: fc.double({ min: 0, max: 10, noNaN: true }),
+	receivers: fc.array(receiverArb, { maxLength: 4 })
+});
+
+/** Group heights for packages on a site (0 m ground-stacked … 15 m flown). */
+export const withHeights = (pkg: PackageSpec, heights: number[]): PackageSpec => ({
+	groups: pkg.groups.map((g, i) => ({ ...g, heightM: heights[i % heights.length] }))
+});
+export const heightsArb = fc.array(fc.double({ min: 0, max: 15, noNaN: true }), {
+	minLength: 1,
+	maxLength: 4
 });
