@@ -72,8 +72,8 @@ export function moneyLines(result: PackageResult): { label: string; value: strin
 
 /** The short form of the cautions, for e-mails and the client's view. */
 export const CLIENT_CAUTIONS = [
-	'These figures are predictions for open, flat ground with no wind or temperature gradient. Levels on the day depend on the site and the weather; we measure on site.',
-	'Wind towards the boundary or a temperature inversion can raise the level there well above the prediction (ground effect follows ISO 9613-2, which assumes downwind propagation).',
+	'These figures are predictions over flat ground, with the wind assumed to blow towards the neighbours (ISO 9613-2). Levels on the day depend on the site and the weather; we measure on site.',
+	'A temperature inversion or a stronger wind can raise the level at a distant neighbour above the prediction and any allowance.',
 	'Barriers, buildings, reflections and delay towers are not modelled.',
 	'Local noise regulations, the licensing authority’s conditions and hearing-safety rules take precedence over any prediction.'
 ];

@@ -1,2 +1,1 @@
 export * from './model-site';
-export { SITE_CAUTIONS } from './cautions';

@@ -3,7 +3,6 @@ import { evaluatePackages, type PackageResult } from '$lib/quotes/evaluate-packa
 import { toModelRequest } from '$lib/quotes/request';
 import type { QuoteRequestInput } from '$lib/schemas/evaluation';
 import type { SiteSnapshot } from '$lib/schemas/sites';
-import { SITE_CAUTIONS } from '$lib/sites/cautions';
 import { CATALOGUE, BOOKINGS, cached } from '../cache';
 import { loadedPackages, reservationsOverlapping, unitsInService } from './catalogue';
 import { DomainError } from './errors';
@@ -65,6 +64,5 @@ export async function evaluateForDesk(
 		inService,
 		reservations
 	});
-	const assumptions = site ? [...MODEL_ASSUMPTIONS, ...SITE_CAUTIONS] : MODEL_ASSUMPTIONS;
-	return { request, results, assumptions, site, currency: settings.currency };
+	return { request, results, assumptions: MODEL_ASSUMPTIONS, site, currency: settings.currency };
 }
