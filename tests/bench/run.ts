@@ -8,6 +8,7 @@
  */
 import { fileURLToPath } from 'node:url';
 import { acousticsRows, runAcousticsBench } from './acoustics.bench';
+import { runLevelMapBench } from './level-map.bench';
 import { httpRows, LOAD, measureHttp } from './http-suite';
 import type { LoadResult } from './http-load';
 import { pageWeight, type PageWeight } from './page-weight';
@@ -55,6 +56,8 @@ async function main(): Promise<void> {
 	const notes: string[] = [];
 	log('acoustic model (in this process, before the world starts)');
 	const acoustics = runAcousticsBench();
+	log('level map (levelGrid + contours, 100 × 100, in this process)');
+	const levelMaps = runLevelMapBench();
 
 	log('setting up the bench world from nothing (MariaDB, migrate, seed, fakes, build, boot)…');
 	let world: World;
@@ -94,6 +97,15 @@ async function main(): Promise<void> {
 		},
 		{ metric: 'app boot (node build → /api/health 200)', value: world.bootS, unit: 's' },
 		...acousticsRows(acoustics),
+		...levelMaps.map((m) => ({
+			metric: m.name,
+			value: m.opsPerSec,
+			unit: '/s',
+			baseline: m.baselineOpsPerSec,
+			ratio: m.ratio,
+			target: '≥ 10/s',
+			ok: m.opsPerSec >= 10
+		})),
 		...httpRows(load, notes),
 		...pages.map((p) => ({
 			metric: `JS for ${p.path}${p.finalPath !== p.path ? ` (→ ${p.finalPath})` : ''} as ${p.role.split('@')[0]}, ${p.modules} modules`,

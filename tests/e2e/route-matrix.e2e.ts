@@ -133,6 +133,9 @@ const TABLE: Record<string, Row> = {
 	// An empty choice would be valid (it clears the assignment), so the form carries a unit id that cannot be read.
 	'action /bookings/[id=id]?/assign':          { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D, form: { unit: 'not-a-unit' } },
 
+	// A preview of the site plan (sites:read); the sites pages may replace it.
+	'load /sites/plan-preview':                  { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+
 	'layout /inventory':                         { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
 	'load /inventory':                           { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D }, // on to the loudspeakers
 	'load /inventory/import':                    { out: S, admin: 'ok', warehouse: 'ok', sales: D, client: D, stranger: D },
