@@ -136,7 +136,7 @@ describe('site plan preview on a touch screen', () => {
 		const y = box.y + box.height / 2;
 		// Playwright has no touch drag; Chromium's DevTools protocol sends real touch events.
 		const cdp = await page.context().newCDPSession(page);
-		const touch = (type: string, points: { x: number; y: number }[]) =>
+		const touch = (type: 'touchStart' | 'touchMove' | 'touchEnd', points: { x: number; y: number }[]) =>
 			cdp.send('Input.dispatchTouchEvent', { type, touchPoints: points });
 		await touch('touchStart', [{ x, y }]);
 		for (let i = 1; i <= 6; i++) await touch('touchMove', [{ x: x - 5 * i, y: y + 5 * i }]);

@@ -70,14 +70,23 @@ describe('sites in the browser', () => {
 		expect(before.binding).not.toBe('Park fence');
 		await screenshot(page, 'site-fence-behind-1280');
 
-		// In front of the stage: east of the system (it aims east), close to the audience.
-		const fence = page.getByRole('group', { name: /Park fence/ });
-		await fence.getByLabel(/^East/).fill('25');
-		await fence.getByLabel(/^North/).fill('-5');
+		const plan = page.getByRole('group', { name: /^Plan of/ });
+		const planBefore = await plan.innerHTML();
+		// In front of the stage: the system aims east, so move the fence 65 m east and 30 m north on the plan
+		// with the keyboard (10 m per shift+arrow, 1 m per arrow).
+		const marker = page.getByTestId('plan-receiver').filter({ hasText: 'Park fence' });
+		await marker.focus();
+		for (let i = 0; i < 6; i++) await page.keyboard.press('Shift+ArrowRight');
+		for (let i = 0; i < 5; i++) await page.keyboard.press('ArrowRight');
+		for (let i = 0; i < 3; i++) await page.keyboard.press('Shift+ArrowUp');
+		await expect.poll(async () => page.locator('form').getByRole('group', { name: /Park fence/ }).getByLabel(/^East/).inputValue()).toBe('25');
 
 		await expect.poll(async () => (await page.getByTestId('binding-receiver').textContent())?.trim()).toBe('Park fence');
 		await expect.poll(async () => (await outcome.textContent()) ?? '').toMatch(/Over the limit/);
 		expect(await page.getByTestId('receiver-predictions').textContent()).not.toBe(before.table);
+		// The plan redraws with the fence in its new place, the level map still on it.
+		await expect.poll(async () => plan.innerHTML()).not.toBe(planBefore);
+		await page.getByTestId('level-map').waitFor();
 		await screenshot(page, 'site-fence-in-front-1280');
 		await page.close();
 	});
