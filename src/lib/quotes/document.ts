@@ -3,7 +3,8 @@
  * by the server as a PDF and by the print view as a page, so both say the same thing.
  */
 import type { PackageResult } from './evaluate-packages';
-import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, moneyLines } from './plain-language';
+import { OUTCOME_WORDS, outcomeOf } from './outcome';
+import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines } from './plain-language';
 import { formatMoney } from './pricing';
 import type { QuoteRequestInput } from '../schemas/evaluation';
 
@@ -52,6 +53,7 @@ export function quoteDocument(source: DocumentSource, letterhead: Letterhead, te
 	const { result, request } = source;
 	const p = result.price;
 	const boundary = boundarySentence(result, request);
+	const limits = limitsSentence(result, request);
 	const siteName = source.site?.name?.trim();
 	return {
 		letterhead: {
@@ -77,7 +79,14 @@ export function quoteDocument(source: DocumentSource, letterhead: Letterhead, te
 			...lines(source.client.billingAddress),
 			...(source.client.taxNumber ? [`Tax number ${source.client.taxNumber}`] : [])
 		],
-		promise: [`${result.packageName} to give ${levelPromise(request)}.`, headroomSentence(result), ...(boundary ? [boundary] : [])],
+		promise: [
+			`${result.packageName} to give ${levelPromise(request)}.`,
+			headroomSentence(result),
+			`Assessment: ${OUTCOME_WORDS[outcomeOf(result)]}.`,
+			...(boundary ? [boundary] : []),
+			...(limits ? [limits] : []),
+			...receiverLines(result)
+		],
 		equipment: [...result.billOfMaterials.loudspeakers, ...result.billOfMaterials.amplifiers].map((l) => ({ name: l.name, count: l.count })),
 		priceLines: p.lines.map((l) => ({
 			description: l.description,
