@@ -120,6 +120,14 @@ describe('every main page passes axe (no serious or critical findings), fits a p
 					await p.getByText('At most 120 dB').waitFor();
 				}
 			},
+			{
+				name: 'loudspeaker-edit-directivity-grid',
+				path: `/inventory/loudspeakers/${speakerId}/edit`,
+				ready: async (p) => {
+					await p.getByRole('button', { name: 'Enter a table' }).click();
+					await p.getByLabel('1 kHz at 90°, dB').waitFor();
+				}
+			},
 			{ name: 'loudspeaker-detail', path: `/inventory/loudspeakers/${speakerId}` },
 			{ name: 'amplifier-detail', path: `/inventory/amplifiers/${ampId}` },
 			{ name: 'package-new', path: '/inventory/packages/new' },

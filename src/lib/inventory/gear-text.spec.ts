@@ -14,3 +14,11 @@ describe('gear data in words', () => {
 		expect(historyValueText('directivity', null)).toBeNull();
 	});
 });
+
+describe('labels of the band columns', () => {
+	it('names a band response column by its band', async () => {
+		const { fieldLabel } = await import('./labels');
+		expect(fieldLabel('bandResponseDb.31.5')).toBe('Band response, 31.5 Hz (dB re sensitivity)');
+		expect(fieldLabel('compressionDb')).toBe('Power compression (dB)');
+	});
+});

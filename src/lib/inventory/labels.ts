@@ -50,6 +50,12 @@ export const KIND_LABELS = {
 export const STATUS_LABELS = { ready: 'Ready', 'in-repair': 'In repair', retired: 'Retired' } as const;
 
 export function fieldLabel(field: string): string {
+	// A CSV column of one band of an object field: `bandResponseDb.63` → "Band response, 63 Hz (dB re sensitivity)".
+	const [prefix, band] = field.split(/\.(.+)/);
+	if (band && FIELD_LABELS[prefix] && /^\d+(\.\d+)?$/.test(band)) {
+		const { label, unit } = FIELD_LABELS[prefix];
+		return `${label}, ${band} Hz${unit ? ` (${unit})` : ''}`;
+	}
 	const entry = FIELD_LABELS[field];
 	if (!entry) return field;
 	return entry.unit ? `${entry.label} (${entry.unit})` : entry.label;
