@@ -103,7 +103,9 @@ describe('uploading attachments', () => {
 		const [kept] = await listAttachments('loudspeaker', id);
 		expect(kept.originalName).toBe('b.webp');
 		const [{ n }] = await sequelize.query<{ n: number }>(
-			`SELECT COUNT(*) AS n FROM stored_files f WHERE f.name LIKE '%.png' AND NOT EXISTS (SELECT 1 FROM model_attachments a WHERE a.storedName = f.name)`,
+			`SELECT COUNT(*) AS n FROM stored_files f WHERE f.name LIKE '%.png' AND NOT EXISTS (SELECT 1 FROM model_attachments a WHERE a.storedName = f.name)
+			   AND NOT EXISTS (SELECT 1 FROM damage_reports d WHERE d.photoStoredName = f.name)
+			   AND NOT EXISTS (SELECT 1 FROM company_settings c WHERE c.logoFile = f.name)`,
 			{ type: QueryTypes.SELECT }
 		);
 		expect(Number(n), 'the replaced photo is gone with its row').toBe(0);
