@@ -10,6 +10,7 @@ import { airConstants } from './absorption';
 import { BAND_COUNT } from './bands';
 import { dbToEnergy, energyToLevels, fillEnergy, type Environment } from './field';
 import type { PreparedPackage } from './groups';
+import { positionOnSite, siteField, type SiteField } from './placement';
 import { requirementFor, type Requirement } from './requirement';
 import type { CheckedSite } from './site';
 import { BAND_WEIGHTINGS_DB } from './weighting';
@@ -32,6 +33,8 @@ export interface DrivenPackage {
 	/** Per weighting, 10^((drive_b + W_b)/10) (0 where not driven), filled by gainsFor when first needed. */
 	gains: Record<Weighting, Float64Array>;
 	gainsReady: Record<Weighting, boolean>;
+	/** With a site, the package's cached field on it (placement.ts), else null. */
+	field: SiteField | null;
 }
 
 const driven: DrivenPackage = {
@@ -46,7 +49,8 @@ const driven: DrivenPackage = {
 		C: new Float64Array(BAND_COUNT),
 		Z: new Float64Array(BAND_COUNT)
 	},
-	gainsReady: { A: false, C: false, Z: false }
+	gainsReady: { A: false, C: false, Z: false },
+	field: null
 };
 
 /** Each weighting as a linear factor 10^(W_b/10) at the exact band frequencies. */
@@ -70,11 +74,16 @@ export function gainsFor(d: DrivenPackage, weighting: Weighting): Float64Array {
 	return gains;
 }
 
-/** The caller has checked the request (and site); air and programme are checked here. */
+/**
+ * The caller has checked the request (and site); air and programme are checked here. useField
+ * (with a site) takes the position from the package's cached field on the site and leaves that
+ * field in `field` for the other points.
+ */
 export function drivePackage(
 	prepared: PreparedPackage,
 	request: QuoteRequest,
-	site: CheckedSite | null
+	site: CheckedSite | null,
+	useField = false
 ): DrivenPackage {
 	const air = airConstants(request.air);
 	const env = driven.env;
@@ -92,19 +101,28 @@ export function drivePackage(
 	if (driven.contributions.length < prepared.groups.length * BAND_COUNT)
 		driven.contributions = new Float64Array(prepared.groups.length * BAND_COUNT);
 	// The position is on the aim bearing: off-axis angle 0 exactly.
-	const heightM = site === null ? 0 : site.positionHeightM;
-	const rRef = fillEnergy(
-		prepared.groups,
-		env,
-		request.distanceM,
-		0,
-		heightM,
-		continuousDb,
-		peakDb,
-		driven.contributions
-	);
-	energyToLevels(continuousDb, env.alphas, rRef);
-	energyToLevels(peakDb, env.alphas, rRef);
+	driven.field = null;
+	if (site !== null && useField) {
+		const field = (driven.field = siteField(prepared, site, air));
+		positionOnSite(field, prepared, site, request.distanceM);
+		continuousDb.set(field.positionContinuousDb);
+		peakDb.set(field.positionPeakDb);
+		driven.contributions.set(field.positionContributions);
+	} else {
+		const heightM = site === null ? 0 : site.positionHeightM;
+		const rRef = fillEnergy(
+			prepared.groups,
+			env,
+			request.distanceM,
+			0,
+			heightM,
+			continuousDb,
+			peakDb,
+			driven.contributions
+		);
+		energyToLevels(continuousDb, env.alphas, rRef);
+		energyToLevels(peakDb, env.alphas, rRef);
+	}
 	for (let b = 0; b < BAND_COUNT; b++) drive[b] = Number.NaN;
 	driven.gainsReady.A = driven.gainsReady.C = driven.gainsReady.Z = false;
 	for (let b = 0; b < BAND_COUNT; b++) linearDrive[b] = 0;

@@ -5,7 +5,7 @@ import { drivePackage, type DrivenPackage } from './drive';
 import { preparePackage, type PreparedGroup } from './groups';
 import { boundaryPrediction, limitsOf, outcomeOf, receiverPredictions } from './receivers';
 import { DEFAULT_MARGIN_DB, checkRequest } from './requirement';
-import { checkSite } from './site';
+import { checkSiteOnce } from './site';
 import type {
 	BandResult,
 	CapabilityLimit,
@@ -20,10 +20,10 @@ const NO_RECEIVERS: never[] = [];
 
 export function evaluatePackage(pkg: PackageSpec, request: QuoteRequest): Evaluation {
 	checkRequest(request);
-	const site = request.site === undefined ? null : checkSite(request.site);
+	const site = request.site === undefined ? null : checkSiteOnce(request.site);
 	const prepared = preparePackage(pkg);
 	const groups = prepared.groups;
-	const driven = drivePackage(prepared, request, site);
+	const driven = drivePackage(prepared, request, site, true);
 	const { requirement, continuousDb: continuous, peakDb: peak } = driven;
 
 	// Step 5: per-band headroom; the lowest band wins a tie because the scan is ascending and strict.
@@ -66,12 +66,12 @@ export function evaluatePackage(pkg: PackageSpec, request: QuoteRequest): Evalua
 
 	// Steps 8 and 9.
 	const boundary = request.boundary
-		? boundaryPrediction(groups, driven, site, request.targetDb, request.boundary)
+		? boundaryPrediction(prepared, driven, site, request.targetDb, request.boundary)
 		: null;
 	const receivers =
 		site === null || site.receivers.length === 0
 			? NO_RECEIVERS
-			: receiverPredictions(groups, driven, site, request.targetDb);
+			: receiverPredictions(driven.field!, driven, site, request.targetDb);
 	const limits = limitsOf(receivers, boundary);
 	return {
 		headroomDb,

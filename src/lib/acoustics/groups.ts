@@ -28,6 +28,8 @@ import {
 	checkLoudspeakerPower,
 	type CabinetCapability
 } from './power';
+import type { SiteField } from './placement';
+import type { CheckedSite } from './site';
 import type { GroupSpec, LoudspeakerKind, PackageSpec } from './types';
 
 const KINDS: readonly LoudspeakerKind[] = [
@@ -69,6 +71,8 @@ export interface PreparedPackage {
 	groups: PreparedGroup[];
 	amplifierChannelsNeeded: number;
 	amplifiersNeeded: number;
+	/** This package's field on each site it was evaluated on (placement.ts), by CheckedSite. */
+	siteFields: WeakMap<CheckedSite, SiteField>;
 }
 
 export const DEFAULT_GROUP_HEIGHT_M = 1.5;
@@ -225,7 +229,11 @@ export function preparePackage(pkg: PackageSpec): PreparedPackage {
 	const cached = PREPARED.get(pkg);
 	if (cached !== undefined && sameGroups(cached, pkg.groups)) return cached.prepared;
 	const groups = pkg.groups.map(prepareGroup);
-	const prepared: PreparedPackage = { groups, ...amplifierNeeds(pkg.groups) };
+	const prepared: PreparedPackage = {
+		groups,
+		...amplifierNeeds(pkg.groups),
+		siteFields: new WeakMap()
+	};
 	PREPARED.set(pkg, { groupsRef: pkg.groups, groupRefs: [...pkg.groups], prepared });
 	return prepared;
 }

@@ -79,6 +79,13 @@
  *   list and each group): a group edited in place must be replaced by a new object to be seen.
  *   A programme is checked once per object and kept while its nine band values and crest factor
  *   are unchanged (a key that is not a band, added after the first evaluation, is not noticed).
+ * - A site is checked once per object and kept while its aimDeg, groundFactor, positionHeightM,
+ *   allowanceDb, receivers list and each receiver object are unchanged: a receiver edited in place
+ *   must be replaced by a new object to be seen. For each (prepared package, checked site, air) the
+ *   field on the site is kept inside the prepared package (placement.ts): each receiver's distance,
+ *   off-axis angle and energy sums (slant distances, directivity, ground, air absorption,
+ *   spreading), and the position's and boundary point's at the last distance asked. An evaluation
+ *   then only applies the drive; the numbers are the same computation, so results do not change.
  * - With a site, receiver and grid levels carry all their air absorption inside the energy sums
  *   (faster); beyond roughly 3000 dB of absorption (some 15–40 km at 8 kHz) such a band underflows
  *   to silence, so a receiver that far predicts −Infinity (margin +Infinity) in those bands. The

@@ -2,11 +2,11 @@
  * Predictions at points other than the position (contract steps 8–10): the boundary, each site
  * receiver, grid points; then `limits`, `outcome` and the ranking of outcomes.
  */
-import { BAND_COUNT, bandIndexOf } from './bands';
+import { BAND_COUNT } from './bands';
 import { gainsFor, type DrivenPackage } from './drive';
 import { drivenLevel, fillEnergy, gainedLevel } from './field';
-import { offAxisDeg } from './geometry';
-import type { PreparedGroup } from './groups';
+import type { PreparedGroup, PreparedPackage } from './groups';
+import { boundaryOnSite, type SiteField } from './placement';
 import { DEFAULT_LISTENING_HEIGHT_M, type CheckedSite } from './site';
 import { BAND_WEIGHTINGS_DB } from './weighting';
 import {
@@ -51,25 +51,46 @@ export function drivenLevelAt(
 	}
 	// With a site, all absorption goes inside the sums and the drive is applied as linear gains.
 	fillEnergy(groups, driven.env, dpM, phiDeg, heightM, energy, null, null, true, bandIndex);
-	if (bandIndex >= 0) return drive + 10 * Math.log10(energy[bandIndex]);
-	return gainedLevel(energy, gainsFor(driven, weighting));
+	return levelFromSums(energy, driven, weighting, bandIndex);
+}
+
+/** drivenLevelAt's site branch from sums already filled (all absorption inside). */
+function levelFromSums(
+	sums: Float64Array,
+	driven: DrivenPackage,
+	weighting: Weighting,
+	bandIndex: number
+): number | null {
+	const drive = bandIndex < 0 ? 0 : driven.drive[bandIndex];
+	if (drive !== drive) return null;
+	if (bandIndex >= 0) return drive + 10 * Math.log10(sums[bandIndex]);
+	return gainedLevel(sums, gainsFor(driven, weighting));
 }
 
 /** Step 8. Without a site: free field on axis at D. With one: D on the aim bearing, 1.5 m high, plus the allowance. */
 export function boundaryPrediction(
-	groups: readonly PreparedGroup[],
+	prepared: PreparedPackage,
 	driven: DrivenPackage,
 	site: CheckedSite | null,
 	targetDb: number,
 	boundary: { distanceM: number; limitDb: number; weighting: Weighting }
 ): BoundaryResult {
-	const level = drivenLevelAt(
-		groups,
-		driven,
-		boundary.distanceM,
-		0,
-		DEFAULT_LISTENING_HEIGHT_M,
-		boundary.weighting
+	const level = (
+		site !== null && driven.field !== null
+			? levelFromSums(
+					boundaryOnSite(driven.field, prepared, site, boundary.distanceM),
+					driven,
+					boundary.weighting,
+					-1
+				)
+			: drivenLevelAt(
+					prepared.groups,
+					driven,
+					boundary.distanceM,
+					0,
+					DEFAULT_LISTENING_HEIGHT_M,
+					boundary.weighting
+				)
 	) as number;
 	const predictedDb = site === null ? level : level + site.allowanceDb;
 	const marginDb = boundary.limitDb - predictedDb;
@@ -82,9 +103,9 @@ export function boundaryPrediction(
 	};
 }
 
-/** Step 9: every receiver of the site, in the site's order. */
+/** Step 9: every receiver of the site, in the site's order, from the package's field on it. */
 export function receiverPredictions(
-	groups: readonly PreparedGroup[],
+	field: SiteField,
 	driven: DrivenPackage,
 	site: CheckedSite,
 	targetDb: number
@@ -92,18 +113,10 @@ export function receiverPredictions(
 	const results: ReceiverResult[] = new Array(site.receivers.length);
 	for (let i = 0; i < site.receivers.length; i++) {
 		const r = site.receivers[i];
-		const distanceM = Math.sqrt(r.x * r.x + r.y * r.y);
-		const phi = offAxisDeg(r.x, r.y, site.aimDeg);
-		const band = r.bandHz === undefined ? -1 : bandIndexOf(r.bandHz);
-		const level = drivenLevelAt(
-			groups,
-			driven,
-			distanceM,
-			phi,
-			r.heightM ?? DEFAULT_LISTENING_HEIGHT_M,
-			r.weighting,
-			band
-		);
+		const f = field.receivers[i];
+		const distanceM = f.distanceM;
+		const phi = f.offAxisDeg;
+		const level = levelFromSums(f.energy, driven, r.weighting, f.band);
 		const predictedDb = level === null ? null : level + site.allowanceDb;
 		const marginDb = predictedDb === null ? null : r.limitDb - predictedDb;
 		results[i] = {

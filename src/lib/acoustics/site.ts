@@ -72,3 +72,54 @@ function checkReceiver(receiver: Receiver, index: number): void {
 			`${named}: a band limit must be on the 63 Hz or 125 Hz band (got ${String(receiver.bandHz)}).`
 		);
 }
+
+interface SiteEntry {
+	receiversRef: readonly Receiver[];
+	receiverRefs: Receiver[];
+	aimDeg: unknown;
+	groundFactor: unknown;
+	positionHeightM: unknown;
+	allowanceDb: unknown;
+	checked: CheckedSite;
+}
+
+const CHECKED_SITES = new WeakMap<object, SiteEntry>();
+
+/**
+ * checkSite, kept by object identity: the same CheckedSite object comes back while the site's own
+ * numbers, its receivers list and every receiver object are unchanged, so caches keyed by it (the
+ * site geometry in placement.ts) stay valid. A receiver edited in place must be replaced by a new
+ * object to be seen (as a package's groups).
+ */
+export function checkSiteOnce(site: Site): CheckedSite {
+	if (site !== null && typeof site === 'object') {
+		const entry = CHECKED_SITES.get(site);
+		if (entry !== undefined && sameSite(entry, site)) return entry.checked;
+	}
+	const checked = checkSite(site);
+	CHECKED_SITES.set(site, {
+		receiversRef: site.receivers,
+		receiverRefs: [...site.receivers],
+		aimDeg: site.aimDeg,
+		groundFactor: site.groundFactor,
+		positionHeightM: site.positionHeightM,
+		allowanceDb: site.allowanceDb,
+		checked
+	});
+	return checked;
+}
+
+function sameSite(entry: SiteEntry, site: Site): boolean {
+	if (
+		entry.aimDeg !== site.aimDeg ||
+		entry.groundFactor !== site.groundFactor ||
+		entry.positionHeightM !== site.positionHeightM ||
+		entry.allowanceDb !== site.allowanceDb ||
+		entry.receiversRef !== site.receivers ||
+		entry.receiverRefs.length !== site.receivers.length
+	)
+		return false;
+	for (let i = 0; i < entry.receiverRefs.length; i++)
+		if (entry.receiverRefs[i] !== site.receivers[i]) return false;
+	return true;
+}
