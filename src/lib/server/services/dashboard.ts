@@ -1,5 +1,6 @@
 /** The overview page: what each role should look at first. */
 import { Op } from 'sequelize';
+import { can } from '$lib/permissions';
 import { quoteReference } from '$lib/quotes/reference';
 import type { ClientResponse } from '$lib/quotes/states';
 import { Quote, StockUnit } from '../db';
@@ -28,10 +29,10 @@ const CLIENT_ANSWER_WHY = { declined: 'The client declined it', 'change-requeste
 export async function overviewFor(user: SessionUser): Promise<Overview> {
 	const today = new Date().toISOString().slice(0, 10);
 	const inAWeek = new Date(Date.now() + 7 * 86_400_000).toISOString().slice(0, 10);
-	const seesQuotes = user.role !== 'warehouse';
-	const seesStock = user.role !== 'client';
+	const seesQuotes = can(user.role, 'quotes:read');
+	const seesStock = can(user.role, 'bookings:read');
 	const [late, due] = seesStock ? await Promise.all([lateUnits(today), unitsDueForTest(today)]) : [[], null];
-	const isDesk = user.role === 'sales' || user.role === 'admin';
+	const isDesk = can(user.role, 'quotes:write');
 	const [quotes, bookings, inRepair, flagged, notices] = await Promise.all([
 		seesQuotes ? listQuotes(user, { limit: 8 }) : Promise.resolve([]),
 		seesStock ? listBookings(today, { until: inAWeek }) : Promise.resolve([]),

@@ -1,6 +1,7 @@
 import { requireCapability } from '$lib/server/auth/guards';
 import { countQuotes, listQuotes } from '$lib/server/services/quotes';
 import type { PageServerLoad } from './$types';
+import { can } from '$lib/permissions';
 
 /** The newest quotes shown at once; older ones are found by searching (measured: tests/bench). */
 const SHOWN = 200;
@@ -10,5 +11,5 @@ export const load: PageServerLoad = async (event) => {
 	event.depends('app:quotes');
 	const search = (event.url.searchParams.get('q') ?? '').slice(0, 100);
 	const [quotes, total] = await Promise.all([listQuotes(user, { search, limit: SHOWN }), countQuotes(user, search)]);
-	return { quotes, total, search, canCreate: user.role === 'sales' || user.role === 'admin' };
+	return { quotes, total, search, canCreate: can(user.role, 'quotes:write') };
 };
