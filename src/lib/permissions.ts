@@ -67,6 +67,7 @@ export const NAVIGATION: readonly NavItem[] = [
 	{ href: '/quotes', label: 'Quotes', capability: 'quotes:read' },
 	{ href: '/clients', label: 'Clients', capability: 'clients:read' },
 	{ href: '/bookings', label: 'Bookings', capability: 'bookings:read' },
+	{ href: '/sites', label: 'Sites', capability: 'sites:read' },
 	{ href: '/inventory', label: 'Inventory', capability: 'inventory:read' },
 	{ href: '/admin/users', label: 'Users', capability: 'users:manage' },
 	{ href: '/admin/programmes', label: 'Programmes', capability: 'programmes:manage' },

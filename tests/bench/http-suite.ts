@@ -22,6 +22,22 @@ const EVALUATION_BODY = {
 	endDate: '2031-06-13'
 };
 
+/** The same request with a site of three receivers entered with it (metres east/north of the system). */
+const EVALUATION_WITH_SITE_BODY = {
+	...EVALUATION_BODY,
+	boundary: undefined,
+	site: {
+		ground: 'porous',
+		aimDeg: 90,
+		allowanceDb: 2,
+		receivers: [
+			{ name: 'Behind', x: -120, y: 20, heightM: 4, limitDb: 65, weighting: 'A' },
+			{ name: 'Beside', x: -30, y: -25, limitDb: 75, weighting: 'A' },
+			{ name: 'Across', x: 180, y: 260, heightM: 3, limitDb: 75, weighting: 'Z', bandHz: 63 }
+		]
+	}
+};
+
 export async function measureHttp(
 	origin: string,
 	sales: string,
@@ -40,6 +56,18 @@ export async function measureHttp(
 				'content-type': 'application/json'
 			},
 			body: JSON.stringify(EVALUATION_BODY)
+		},
+		{
+			name: 'POST /api/evaluations with a site (sales)',
+			path: '/api/evaluations',
+			method: 'POST',
+			headers: {
+				cookie: sales,
+				origin,
+				accept: 'application/json',
+				'content-type': 'application/json'
+			},
+			body: JSON.stringify(EVALUATION_WITH_SITE_BODY)
 		},
 		{
 			name: 'GET /quotes/new (sales, HTML)',

@@ -53,6 +53,7 @@ import { csvVerdict, envelopeProblem, jsonVerdict, REFUSALS } from './proof/orac
 import { signInEveryone, type Role, type Sessions } from './proof/people';
 import { rawRequest, type RawAnswer } from './proof/raw-http';
 import { differences, snapshot, type Snapshot } from './proof/snapshot';
+import { siteSchema, siteUpdateSchema } from '../../src/lib/schemas/sites';
 import { discoverEntryPoints } from './proof/routes';
 import { hostileUploads, multipartBody, type HostileUpload } from './proof/uploads';
 
@@ -76,6 +77,9 @@ const TARGETS: Record<string, Target> = {
 	// Open to the signed-out: asking for a link is how they get back in.
 	'POST /api/sign-in-links': { as: 'out', body: 'json', schema: linkRequestSchema },
 	'POST /api/password-resets': { as: 'out', body: 'json', schema: linkRequestSchema },
+	'POST /api/sites': { as: 'sales', body: 'json', schema: siteSchema },
+	'PUT /api/sites/[id=id]': { as: 'sales', body: 'json', schema: siteSchema },
+	'PATCH /api/sites/[id=id]': { as: 'sales', body: 'json', schema: siteUpdateSchema },
 	'POST /api/loudspeakers': { as: 'warehouse', body: 'json', schema: loudspeakerSchema },
 	'PATCH /api/loudspeakers/[id=id]': {
 		as: 'warehouse',

@@ -121,12 +121,12 @@ describe('POST /api/evaluations', () => {
 		startDate: '2032-08-01', endDate: '2032-08-01', boundary: { distance: 800, limitDb: 75, weighting: 'C' }
 	};
 
-	it('ranks packages clear → tight → short for sales and admin; 403 for others; 401 signed out', async () => {
+	it('ranks packages clear → tight → over the limit → short for sales and admin; 403 for others; 401 signed out', async () => {
 		const sales = await sessionCookie('sales@kestrel-yard.test');
 		const result = await api('/api/evaluations', { cookie: sales, method: 'POST', body });
 		expect(result.status).toBe(200);
-		const order = { clear: 0, tight: 1, short: 2 } as Record<string, number>;
-		const verdicts = result.json.results.map((r: { verdict: string }) => order[r.verdict]);
+		const order = { clear: 0, tight: 1, 'over-limit': 2, short: 3 } as Record<string, number>;
+		const verdicts = result.json.results.map((r: { outcome: string }) => order[r.outcome]);
 		expect(verdicts).toEqual([...verdicts].sort((a, b) => a - b));
 		for (const r of result.json.results) {
 			expect(Number.isInteger(r.price.totalMinor)).toBe(true);

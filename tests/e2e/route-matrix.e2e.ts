@@ -54,6 +54,13 @@ const TABLE: Record<string, Row> = {
 	'PATCH /api/users/[id=id]':                  { out: S, admin: 'allowed', warehouse: D, sales: D, client: D, stranger: D },
 	'POST /api/evaluations':                     { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
 
+	'GET /api/sites':                            { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'POST /api/sites':                           { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
+	'GET /api/sites/[id=id]':                    { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'PUT /api/sites/[id=id]':                    { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
+	'PATCH /api/sites/[id=id]':                  { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
+	'DELETE /api/sites/[id=id]':                 { out: S, admin: 'ok', warehouse: D, sales: 'ok', client: D, stranger: D, fresh: 'site' },
+
 	'GET /api/loudspeakers':                     { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
 	'POST /api/loudspeakers':                    { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
 	'GET /api/loudspeakers.csv':                 { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
@@ -223,6 +230,13 @@ const TABLE: Record<string, Row> = {
 	'action /inventory/units/[id=id]?/save':     { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
 	'action /inventory/units/[id=id]?/delete':   { out: S, admin: 'ok', warehouse: 'ok', sales: D, client: D, stranger: D, fresh: 'unit' },
 
+	'load /sites':                               { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'load /sites/new':                           { out: S, admin: 'ok', warehouse: D, sales: 'ok', client: D, stranger: D },
+	'action /sites/new?/default':                { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
+	'load /sites/[id=id]':                       { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'action /sites/[id=id]?/save':               { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
+	'action /sites/[id=id]?/delete':             { out: S, admin: 'ok', warehouse: D, sales: 'ok', client: D, stranger: D, fresh: 'site' },
+
 	'load /quotes':                              { out: S, admin: 'ok', warehouse: D, sales: 'ok', client: 'ok', stranger: 'ok' },
 	'load /quotes/new':                          { out: S, admin: 'ok', warehouse: D, sales: 'ok', client: D, stranger: D },
 	'action /quotes/new?/save':                  { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
@@ -243,7 +257,7 @@ const TABLE: Record<string, Row> = {
 /** Well-formed (so it reaches the lookup) but issued to nobody. */
 const UNKNOWN_LINK_TOKEN = 'proof-suite-unknown-link-token';
 
-type Ids = InventoryFixtures & QuoteFixtures & { userId: number; clientId: number; programmeSlug: string };
+type Ids = InventoryFixtures & QuoteFixtures & { userId: number; clientId: number; programmeSlug: string; siteId: number };
 
 let sessions: Sessions;
 let ids: Ids;
@@ -261,6 +275,7 @@ function idFor(collection: string, row: Row): number {
 		'damage-reports': ids.unitId,
 		users: ids.userId,
 		clients: ids.clientId,
+		sites: ids.siteId,
 		quotes: row.quote === 'cancelled' ? ids.cancelledQuoteId : ids.sentQuoteId
 	};
 	const id = byCollection[collection];
@@ -304,12 +319,14 @@ beforeAll(async () => {
 	const inventory = await makeInventoryFixtures(sessions.admin!);
 	const quotes = await makeQuoteFixtures(sessions);
 	const users = await api('/api/users', { cookie: sessions.admin });
+	const site = await api('/api/sites', { cookie: sessions.admin, method: 'POST', body: { name: 'Proof matrix site', receivers: [] } });
 	ids = {
 		...inventory,
 		...quotes,
 		userId: (users.json as { id: number }[])[0].id,
 		clientId: (users.json as { clientId: number | null }[]).find((u) => u.clientId !== null)!.clientId!,
-		programmeSlug: await programmeSlug()
+		programmeSlug: await programmeSlug(),
+		siteId: (site.json as { id: number }).id
 	};
 }, 120_000);
 

@@ -1,11 +1,14 @@
 import type { QuoteRequest } from '$lib/acoustics';
 import type { PackageResult } from '$lib/quotes/evaluate-packages';
+import type { SiteSnapshot } from '$lib/schemas/sites';
 
 export interface EvaluationResponse {
 	/** The request as the model saw it (metres, programme resolved). */
 	request: QuoteRequest;
 	results: PackageResult[];
 	assumptions: string[];
+	/** The site evaluated; null without one. */
+	site: SiteSnapshot | null;
 	currency: string;
 }
 

@@ -3,12 +3,21 @@
  * dates, the hire price, and a level-versus-distance curve, then ranks them for the desk.
  * Pure: the caller loads packages, stock counts and bookings.
  */
-import { evaluatePackage, levelCurve, type Evaluation, type LevelPoint, type QuoteRequest } from '../acoustics';
+import {
+	evaluatePackage,
+	levelCurve,
+	type Evaluation,
+	type LevelPoint,
+	type LimitsResult,
+	type Outcome,
+	type QuoteRequest,
+	type ReceiverResult
+} from '../acoustics';
 import { packageBillOfMaterials, toPackageSpec, type BillOfMaterials, type LoadedPackage } from '../inventory';
 import { checkAvailability, type ModelKey, type Reservation } from './availability';
 import { LIMITED_BY_LABELS } from './limits';
 import { priceHire, type Price, type PriceLineInput, type PriceSettings } from './pricing';
-import { rank, effectiveVerdict, type Verdict } from './ranking';
+import { rank, effectiveOutcome, effectiveVerdict, type Verdict } from './ranking';
 import { chartDistances } from './request';
 
 export interface ShortfallLine {
@@ -26,6 +35,12 @@ export interface PackageResult {
 	description: string;
 	/** The acoustic verdict, made `short` when the stock is not there on the dates. */
 	verdict: Verdict;
+	/** The verdict with the site's and boundary's limits taken in; `short` when the stock is not there. */
+	outcome: Outcome;
+	/** Every limit met? The highest target that keeps them all, and the receiver that binds. */
+	limits: LimitsResult;
+	/** One per site receiver: predicted level, limit and margin; [] without a site. */
+	receivers: ReceiverResult[];
 	headroomDb: number;
 	limitedBy: string | null;
 	/** Set when the package could not be evaluated at all (e.g. a load below an amplifier's minimum). */
@@ -69,8 +84,9 @@ function neededUnits(bom: BillOfMaterials): Partial<Record<ModelKey, number>> {
 function limitLabel(evaluation: Evaluation | null, available: boolean): string | null {
 	if (!available) return LIMITED_BY_LABELS.availability;
 	if (!evaluation) return null;
-	if (evaluation.verdict !== 'short' && evaluation.boundary && evaluation.boundary.marginDb < 0) {
-		return LIMITED_BY_LABELS.boundary;
+	if (evaluation.verdict !== 'short' && !evaluation.limits.ok) {
+		const binding = evaluation.limits.bindingReceiver;
+		return binding && binding !== 'boundary' ? `${LIMITED_BY_LABELS.receiver} ${binding}` : LIMITED_BY_LABELS.boundary;
 	}
 	return evaluation.limitedBy ? LIMITED_BY_LABELS[evaluation.limitedBy] : null;
 }
@@ -104,6 +120,9 @@ export function evaluateOne(pkg: LoadedPackage, ctx: EvaluationContext): Package
 		packageName: pkg.name,
 		description: pkg.description,
 		verdict: effectiveVerdict({ verdict: acoustic, available: stock.ok }),
+		outcome: effectiveOutcome({ outcome: evaluation?.outcome ?? 'short', available: stock.ok }),
+		limits: evaluation?.limits ?? { ok: true, maxTargetDb: null, bindingReceiver: null },
+		receivers: evaluation?.receivers ?? [],
 		headroomDb: evaluation?.headroomDb ?? -Infinity,
 		limitedBy: error ? 'cannot be evaluated' : limitLabel(evaluation, stock.ok),
 		error,
@@ -115,7 +134,7 @@ export function evaluateOne(pkg: LoadedPackage, ctx: EvaluationContext): Package
 	};
 }
 
-/** Every package, ranked clear → tight → short, then by price. */
+/** Every package, ranked clear → tight → over the limit → short, then by price. */
 export function evaluatePackages(packages: LoadedPackage[], ctx: EvaluationContext): PackageResult[] {
 	const results = packages.map((pkg) => evaluateOne(pkg, ctx));
 	return rank(

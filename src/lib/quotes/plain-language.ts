@@ -2,6 +2,9 @@
 import { formatMoney } from './pricing';
 import type { PackageResult } from './evaluate-packages';
 import type { QuoteRequestInput } from '../schemas/evaluation';
+import type { SiteSnapshot } from '../schemas/sites';
+import { limitLabel } from '../sites/model-site';
+import { outcomeOf } from './outcome';
 
 export function distanceText(value: number, unit: 'm' | 'ft'): string {
 	return `${Number(value.toFixed(1))} ${unit}`;
@@ -30,6 +33,33 @@ export function boundarySentence(result: PackageResult, request: QuoteRequestInp
 	return `At the boundary, ${where} away, we predict ${predicted}: ${verdict}. To stay within the limit the level at the mix position should not exceed ${b.maxTargetDb.toFixed(1)} dB(${request.weighting}).`;
 }
 
+/** "Over the limit" in words: which neighbour, by how much, and the level that would keep them all within limits. */
+export function limitsSentence(result: PackageResult, request: QuoteRequestInput): string | null {
+	const limits = result.limits ?? result.evaluation?.limits;
+	if (!limits || limits.maxTargetDb === null) return null;
+	const ceiling = `${limits.maxTargetDb.toFixed(1)} dB(${request.weighting})`;
+	if (outcomeOf(result) === 'over-limit') {
+		return `Over the limit: at ${request.targetDb} dB(${request.weighting}) this would exceed the limit at ${limits.bindingReceiver}. The level at the mix position should not exceed ${ceiling} to keep every neighbour within its limit.`;
+	}
+	return `Every neighbour stays within its limit; the limit at ${limits.bindingReceiver} binds first, at ${ceiling} at the mix position.`;
+}
+
+/** One line per receiver: predicted level against its limit. */
+export function receiverLines(result: PackageResult): string[] {
+	return (result.receivers ?? []).map((r) => {
+		const predicted = r.predictedDb === null ? 'no prediction' : `${r.predictedDb.toFixed(1)} dB predicted`;
+		const margin = r.marginDb === null ? '' : r.marginDb >= 0 ? `, ${r.marginDb.toFixed(1)} dB within` : `, ${Math.abs(r.marginDb).toFixed(1)} dB OVER`;
+		return `${r.name}: ${predicted} against ${limitLabel(r)}${margin}`;
+	});
+}
+
+/** The site a quote was evaluated with, named for the client. */
+export function siteSentence(site: SiteSnapshot | null): string | null {
+	if (!site) return null;
+	const count = site.receivers.length;
+	return `Predicted for ${site.name}${site.address ? ` (${site.address})` : ''}, with ${count} neighbouring point${count === 1 ? '' : 's'} and their licence limits${site.allowanceDb ? `, including a ${site.allowanceDb} dB allowance for weather` : ''}.`;
+}
+
 export function moneyLines(result: PackageResult): { label: string; value: string }[] {
 	const p = result.price;
 	return [
@@ -42,7 +72,8 @@ export function moneyLines(result: PackageResult): { label: string; value: strin
 
 /** The short form of the cautions, for e-mails and the client's view. */
 export const CLIENT_CAUTIONS = [
-	'These figures are predictions for open, flat ground with no wind or temperature gradient. Levels on the day depend on the site and the weather; we measure on site.',
-	'Wind towards the boundary or a temperature inversion can raise the level there well above the prediction.',
+	'These figures are predictions over flat ground, with the wind assumed to blow towards the neighbours (ISO 9613-2). Levels on the day depend on the site and the weather; we measure on site.',
+	'A temperature inversion or a stronger wind can raise the level at a distant neighbour above the prediction and any allowance.',
+	'Barriers, buildings, reflections and delay towers are not modelled.',
 	'Local noise regulations, the licensing authority’s conditions and hearing-safety rules take precedence over any prediction.'
 ];

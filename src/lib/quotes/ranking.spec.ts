@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
+import type { Outcome } from '../acoustics';
 import { rank } from './ranking';
 
-const item = (name: string, verdict: 'clear' | 'tight' | 'short', totalMinor: number, available = true, headroomDb = 5) => ({
+const item = (name: string, outcome: Outcome, totalMinor: number, available = true, headroomDb = 5) => ({
 	name,
-	verdict,
+	outcome,
 	totalMinor,
 	available,
 	headroomDb
@@ -19,6 +20,10 @@ describe('ranking', () => {
 			item('E', 'tight', 20)
 		]);
 		expect(ranked.map((r) => r.name)).toEqual(['D', 'C', 'E', 'B', 'A']);
+	});
+	it('puts over the limit after tight and before short, whatever the price (acoustics.md step 9)', () => {
+		const ranked = rank([item('Short', 'short', 10), item('Over', 'over-limit', 20), item('Tight', 'tight', 900), item('Clear', 'clear', 950)]);
+		expect(ranked.map((r) => r.name)).toEqual(['Clear', 'Tight', 'Over', 'Short']);
 	});
 	it('puts a package that is not available on the dates with the short ones', () => {
 		const ranked = rank([item('Cheap but booked', 'clear', 10, false), item('Tight', 'tight', 500)]);

@@ -1,10 +1,14 @@
-/** Orders evaluated packages for the desk: clear before tight before short, then cheapest first. */
+/**
+ * Orders evaluated packages for the desk: clear → tight → over the limit → short (contract step 9),
+ * then cheapest first.
+ */
+import { OUTCOME_ORDER, type Outcome } from '../acoustics';
+
+export type { Outcome };
 export type Verdict = 'clear' | 'tight' | 'short';
 
-const VERDICT_ORDER: Record<Verdict, number> = { clear: 0, tight: 1, short: 2 };
-
 export interface Rankable {
-	verdict: Verdict;
+	outcome: Outcome;
 	available: boolean;
 	totalMinor: number;
 	headroomDb: number;
@@ -15,13 +19,17 @@ export interface Rankable {
  * A package that cannot be had on the dates is ranked with the short ones: it cannot be sold.
  * Ties on price go to the one with more headroom, then by name for a stable order.
  */
-export function effectiveVerdict(item: Pick<Rankable, 'verdict' | 'available'>): Verdict {
+export function effectiveVerdict<V extends Verdict | Outcome>(item: { verdict: V; available: boolean }): V | 'short' {
 	return item.available ? item.verdict : 'short';
+}
+
+export function effectiveOutcome(item: Pick<Rankable, 'outcome' | 'available'>): Outcome {
+	return item.available ? item.outcome : 'short';
 }
 
 export function compareForRanking(a: Rankable, b: Rankable): number {
 	return (
-		VERDICT_ORDER[effectiveVerdict(a)] - VERDICT_ORDER[effectiveVerdict(b)] ||
+		OUTCOME_ORDER.indexOf(effectiveOutcome(a)) - OUTCOME_ORDER.indexOf(effectiveOutcome(b)) ||
 		a.totalMinor - b.totalMinor ||
 		b.headroomDb - a.headroomDb ||
 		a.name.localeCompare(b.name)

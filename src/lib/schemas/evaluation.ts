@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { parseIsoDate } from '../quotes/hire-days';
+import { inlineSiteSchema } from './sites';
 
 const FT = 0.3048;
 const toMetres = (value: number, unit: 'm' | 'ft') => (unit === 'ft' ? value * FT : value);
@@ -35,6 +36,9 @@ export const evaluationRequestSchema = z
 				weighting
 			})
 			.optional(),
+		/** A saved site, evaluated as it is now (the quote keeps a snapshot); or an on-the-fly one. */
+		siteId: z.number({ error: 'Choose a saved site' }).int().positive('Choose a saved site').optional(),
+		site: inlineSiteSchema.optional(),
 		startDate: isoDate,
 		endDate: isoDate
 	})
@@ -48,6 +52,9 @@ export const evaluationRequestSchema = z
 			if (b < 1 || b > 5000) {
 				ctx.addIssue({ code: 'custom', path: ['boundary', 'distance'], message: 'The boundary must be 1 m to 5 km from the system' });
 			}
+		}
+		if (r.siteId !== undefined && r.site !== undefined) {
+			ctx.addIssue({ code: 'custom', path: ['siteId'], message: 'Choose a saved site or enter one, not both' });
 		}
 		if (r.startDate > r.endDate) {
 			ctx.addIssue({ code: 'custom', path: ['endDate'], message: 'The hire cannot end before it starts' });

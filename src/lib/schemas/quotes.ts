@@ -69,6 +69,7 @@ export const requestFormSchema = z.object({
 	boundaryDistance: optionalNumber,
 	boundaryLimitDb: optionalNumber,
 	boundaryWeighting: z.enum(['A', 'C', 'Z']).default('A'),
+	siteId: z.number().int().positive().nullable().default(null),
 	notes: z.string().max(4000).default(''),
 	packageId: z.number().int().positive().nullable().default(null)
 });
@@ -89,6 +90,7 @@ export function evaluationBodyFromForm(f: RequestForm): Record<string, unknown> 
 		...(f.boundaryEnabled
 			? { boundary: { distance: f.boundaryDistance, limitDb: f.boundaryLimitDb, weighting: f.boundaryWeighting } }
 			: {}),
+		...(f.siteId !== null ? { siteId: f.siteId } : {}),
 		startDate: f.startDate,
 		endDate: f.endDate
 	};
@@ -140,6 +142,7 @@ export function formFromRequest(request: QuoteRequestInput): Partial<RequestForm
 		boundaryDistance: request.boundary?.distance ?? null,
 		boundaryLimitDb: request.boundary?.limitDb ?? null,
 		boundaryWeighting: request.boundary?.weighting ?? 'A',
+		siteId: request.siteId ?? null,
 		startDate: request.startDate,
 		endDate: request.endDate
 	};

@@ -9,7 +9,7 @@ import { amplifierBody, loudspeakerBody, makeFixtures, tag } from '../inventory-
 /** The smallest file the upload check takes for a spec sheet: it is judged by its first bytes. */
 export const TINY_PDF = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n');
 
-export type ThrowawayKind = 'loudspeaker' | 'amplifier' | 'package' | 'unit' | 'attachment';
+export type ThrowawayKind = 'loudspeaker' | 'amplifier' | 'package' | 'unit' | 'attachment' | 'site';
 
 /** Where an admin reads one row of each kind (200 while it exists, 404 after). */
 export const ROW_URL: Record<ThrowawayKind, string> = {
@@ -17,7 +17,8 @@ export const ROW_URL: Record<ThrowawayKind, string> = {
 	amplifier: '/api/amplifiers',
 	package: '/api/packages',
 	unit: '/api/units',
-	attachment: '/api/attachments'
+	attachment: '/api/attachments',
+	site: '/api/sites'
 };
 
 export interface InventoryFixtures {
@@ -122,6 +123,8 @@ export async function makeThrowaway(
 				}),
 				kind
 			);
+		case 'site':
+			return created(post('/api/sites', { name: `Proof throwaway site ${tag()}`, receivers: [] }), kind);
 		case 'attachment': {
 			// Its own model: an upload replaces the model's earlier sheet, so the shared fixture's stays put.
 			const model = await makeThrowaway('loudspeaker', adminCookie, base);
@@ -151,7 +154,7 @@ export async function removeThrowaways(
 	rows: { kind: ThrowawayKind; id: number }[],
 	adminCookie: string
 ): Promise<void> {
-	const order: ThrowawayKind[] = ['attachment', 'unit', 'package', 'amplifier', 'loudspeaker'];
+	const order: ThrowawayKind[] = ['site', 'attachment', 'unit', 'package', 'amplifier', 'loudspeaker'];
 	for (const kind of order) {
 		for (const row of rows.filter((r) => r.kind === kind)) {
 			await api(`${ROW_URL[kind]}/${row.id}`, { cookie: adminCookie, method: 'DELETE' });

@@ -11,7 +11,8 @@ export const SNAPSHOT_LISTS = [
 	'/api/packages',
 	'/api/units',
 	'/api/users',
-	'/api/quotes'
+	'/api/quotes',
+	'/api/sites'
 ] as const;
 
 /** Moves with every sign-in (by anyone sharing the test world), not with the data. */

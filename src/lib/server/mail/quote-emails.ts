@@ -1,5 +1,6 @@
 import { formatMoney } from '$lib/quotes/pricing';
-import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, moneyLines } from '$lib/quotes/plain-language';
+import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines, siteSentence } from '$lib/quotes/plain-language';
+import { OUTCOME_WORDS } from '$lib/quotes/outcome';
 import type { QuoteDetail } from '../services/quotes';
 import type { EmailMessage } from './outbox';
 import { publicOrigin } from './transport';
@@ -12,10 +13,17 @@ export function quoteSentEmail(quote: QuoteDetail, to: string, companyName: stri
 	const link = `${publicOrigin()}/signin?redirectTo=${encodeURIComponent(`/quotes/${quote.id}`)}`;
 	const oneTime = `${publicOrigin()}/signin/link/${signInToken}`;
 	const boundary = boundarySentence(quote.result, quote.request);
+	const site = siteSentence(quote.site);
+	const limits = limitsSentence(quote.result, quote.request);
+	const receivers = receiverLines(quote.result);
 	const paragraphs = [
 		`Here is our quote ${quote.reference} for ${quote.eventName}, ${quote.startDate} to ${quote.endDate}.`,
 		`We propose "${quote.packageName}" to give ${levelPromise(quote.request)}. ${headroomSentence(quote.result)}`,
+		`Assessment: ${OUTCOME_WORDS[quote.outcome]}.`,
 		...(boundary ? [boundary] : []),
+		...(site ? [site] : []),
+		...(limits ? [limits] : []),
+		...(receivers.length ? [receivers.join('\n')] : []),
 		moneyLines(quote.result).map((l) => `${l.label}: ${l.value}`).join('\n'),
 		`Read the full quote, accept it and pay the deposit here (this link signs you in once, for 14 days):\n${oneTime}`,
 		`Or sign in with your password:\n${link}`,

@@ -9,16 +9,19 @@ import type { SessionUser } from '../users';
 import { DomainError } from './errors';
 import { listProgrammes } from './programmes';
 import { getSettings } from './settings';
+import { listSites } from './sites';
 
 export async function requestFormOptions() {
-	const [clients, programmes, settings] = await Promise.all([
+	const [clients, programmes, settings, sites] = await Promise.all([
 		Client.findAll({ attributes: ['id', 'name'], order: [['name', 'ASC']] }),
 		listProgrammes(),
-		getSettings()
+		getSettings(),
+		listSites()
 	]);
 	return {
 		clients: clients.map((c) => ({ id: c.id, name: c.name })),
 		programmes: programmes.map((p) => ({ slug: p.slug, name: p.name, crestFactorDb: p.crestFactorDb, isTypical: p.isTypical })),
+		sites: sites.map((s) => ({ id: s.id, name: s.name, receiverCount: s.receiverCount })),
 		defaultMarginDb: settings.defaultMarginDb,
 		distanceUnit: settings.distanceUnit
 	};

@@ -1,6 +1,9 @@
 /** Saving and reading quotes. A quote keeps every version; each version snapshots what was priced. */
 import type { Transaction } from 'sequelize';
 import type { PackageResult } from '$lib/quotes/evaluate-packages';
+import { outcomeOf } from '$lib/quotes/outcome';
+import type { Outcome } from '$lib/acoustics';
+import type { SiteSnapshot } from '$lib/schemas/sites';
 import { isEditable, type ClientResponse, type QuoteStatus } from '$lib/quotes/states';
 import type { QuoteCreateInput, QuoteReviseInput } from '$lib/schemas/quotes';
 import type { QuoteRequestInput } from '$lib/schemas/evaluation';
@@ -22,6 +25,8 @@ export interface QuoteSummary {
 	endDate: string;
 	packageName: string;
 	verdict: string;
+	/** Clear, tight, over the limit or short: what every list and badge shows. */
+	outcome: Outcome;
 	totalMinor: number;
 	currency: string;
 	needsRecheck: boolean;
@@ -34,6 +39,8 @@ export interface QuoteDetail extends QuoteSummary {
 	version: number;
 	request: QuoteRequestInput;
 	result: PackageResult;
+	/** The copy of the site this version was evaluated with; null without a site. */
+	site: SiteSnapshot | null;
 	notes: string | null;
 	recheckReason: string | null;
 	versions: { version: number; createdAt: string; packageName: string; totalMinor: number }[];
@@ -50,13 +57,21 @@ export interface QuoteDetail extends QuoteSummary {
 	respondedAt: string | null;
 }
 
-/** Prices and evaluates one package for the request now; a refusal to quote is a 422 on packageId. */
-async function snapshot(request: QuoteRequestInput, packageId: number, quoteId?: number): Promise<PackageResult> {
-	const { results } = await evaluateForDesk(request, { packageIds: [packageId], excludeQuoteId: quoteId });
+interface Snapshot {
+	result: PackageResult;
+	site: SiteSnapshot | null;
+}
+
+/**
+ * Prices and evaluates one package for the request now, against the site as it is now; the version
+ * keeps both. A refusal to quote is a 422 on packageId.
+ */
+async function snapshot(request: QuoteRequestInput, packageId: number, quoteId?: number): Promise<Snapshot> {
+	const { results, site } = await evaluateForDesk(request, { packageIds: [packageId], excludeQuoteId: quoteId });
 	if (results.length === 0) {
 		throw new DomainError(422, 'That package is not available for quoting.', { packageId: ['Choose an active package'] });
 	}
-	return results[0];
+	return { result: results[0], site };
 }
 
 async function clientFor(input: QuoteCreateInput, transaction: Transaction): Promise<number> {
@@ -75,11 +90,11 @@ async function clientFor(input: QuoteCreateInput, transaction: Transaction): Pro
 }
 
 export async function createQuote(input: QuoteCreateInput, actor: SessionUser): Promise<QuoteDetail> {
-	const result = await snapshot(input.request, input.packageId);
+	const evaluated = await snapshot(input.request, input.packageId);
 	const quoteId = await db().transaction(async (transaction) => {
 		const clientId = await clientFor(input, transaction);
 		const quote = await Quote.create({ clientId, eventName: input.eventName, createdById: actor.id }, { transaction });
-		await writeVersion(quote.id, 1, input, result, actor, transaction);
+		await writeVersion(quote.id, 1, input, evaluated, actor, transaction);
 		return quote.id;
 	});
 	return getQuote(quoteId, actor);
@@ -87,7 +102,7 @@ export async function createQuote(input: QuoteCreateInput, actor: SessionUser): 
 
 /** Saves the edited request as a new version; a sent quote goes back to draft until sent again. */
 export async function reviseQuote(id: number, input: QuoteReviseInput, actor: SessionUser): Promise<QuoteDetail> {
-	const result = await snapshot(input.request, input.packageId, id);
+	const evaluated = await snapshot(input.request, input.packageId, id);
 	await db().transaction(async (transaction) => {
 		const quote = await Quote.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
 		if (!quote) throw new DomainError(404, 'No such quote.');
@@ -95,7 +110,7 @@ export async function reviseQuote(id: number, input: QuoteReviseInput, actor: Se
 			throw new DomainError(409, `A quote that is ${quote.status} can no longer be edited.`);
 		}
 		const version = quote.currentVersion + 1;
-		await writeVersion(id, version, input, result, actor, transaction);
+		await writeVersion(id, version, input, evaluated, actor, transaction);
 		await quote.update(
 			{ currentVersion: version, status: 'draft', eventName: input.eventName, needsRecheck: false, recheckReason: null },
 			{ transaction }
@@ -108,7 +123,7 @@ async function writeVersion(
 	quoteId: number,
 	version: number,
 	input: QuoteReviseInput,
-	result: PackageResult,
+	{ result, site }: Snapshot,
 	actor: SessionUser,
 	transaction: Transaction
 ) {
@@ -122,6 +137,8 @@ async function writeVersion(
 			request: input.request,
 			evaluation: result,
 			price: result.price,
+			siteId: site?.siteId ?? null,
+			site,
 			notes: input.notes ?? null,
 			createdById: actor.id
 		},
@@ -148,6 +165,7 @@ function summaryOf(quote: Quote & { client?: Client; versions?: QuoteVersion[] }
 		endDate: current.endDate,
 		packageName: current.evaluation.packageName,
 		verdict: current.evaluation.verdict,
+		outcome: outcomeOf(current.evaluation),
 		totalMinor: current.price.totalMinor,
 		currency: current.price.currency,
 		needsRecheck: quote.needsRecheck,
@@ -186,6 +204,7 @@ export async function getQuote(id: number, actor: SessionUser): Promise<QuoteDet
 		version: current.version,
 		request: current.request,
 		result: current.evaluation,
+		site: current.site ?? null,
 		notes: current.notes,
 		recheckReason: quote.recheckReason,
 		versions: versions.map((v) => ({

@@ -5,8 +5,9 @@ import { SignInLink } from './sign-in-link';
 import { User } from './user';
 import { initQuotingModels, Quote } from './quoting';
 import { initInventoryModels } from './inventory';
+import { initSiteModels, Site, SiteReceiver } from './site';
 
-export { Client, ClientChange, DeskNotice, PasswordReset, SignInLink, User };
+export { Client, ClientChange, DeskNotice, PasswordReset, SignInLink, Site, SiteReceiver, User };
 export * from './quoting';
 export * from './inventory';
 
@@ -25,4 +26,5 @@ export function initModels(sequelize: Sequelize): void {
 	initQuotingModels(sequelize);
 	DeskNotice.initModel(sequelize);
 	DeskNotice.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
+	initSiteModels(sequelize);
 }

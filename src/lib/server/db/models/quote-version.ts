@@ -9,6 +9,7 @@ import {
 import type { PackageResult } from '../../../quotes/evaluate-packages';
 import type { Price } from '../../../quotes/pricing';
 import type { QuoteRequestInput } from '../../../schemas/evaluation';
+import type { SiteSnapshot } from '../../../schemas/sites';
 
 /** One saved state of a quote: the request, the chosen package and the snapshot it was priced on. */
 export class QuoteVersion extends Model<InferAttributes<QuoteVersion>, InferCreationAttributes<QuoteVersion>> {
@@ -22,6 +23,10 @@ export class QuoteVersion extends Model<InferAttributes<QuoteVersion>, InferCrea
 	/** The chosen package's full result at the time: verdict, bands, boundary, stock, curve. */
 	declare evaluation: PackageResult;
 	declare price: Price;
+	/** The saved site it was evaluated with, if any (it may since have been edited or deleted). */
+	declare siteId: CreationOptional<number | null>;
+	/** The copy of the site evaluated: later edits to the site never change this version. */
+	declare site: CreationOptional<SiteSnapshot | null>;
 	declare notes: CreationOptional<string | null>;
 	declare createdById: number;
 	declare createdAt: CreationOptional<Date>;
@@ -39,6 +44,8 @@ export class QuoteVersion extends Model<InferAttributes<QuoteVersion>, InferCrea
 				request: { type: DataTypes.JSON, allowNull: false },
 				evaluation: { type: DataTypes.JSON, allowNull: false },
 				price: { type: DataTypes.JSON, allowNull: false },
+				siteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+				site: { type: DataTypes.JSON, allowNull: true },
 				notes: { type: DataTypes.TEXT, allowNull: true },
 				createdById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
 				createdAt: DataTypes.DATE,
