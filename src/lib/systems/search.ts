@@ -1,0 +1,157 @@
+/**
+ * Suggest: the cheapest systems in stock that are clear for a request. A system is a main group
+ * (full-range or line-array elements) and optionally a subwoofer group. Chains of each role are
+ * sorted by their cheapest member; a pair of chains is searched as a staircase (main count up,
+ * sub count down from the last clear one), since more cabinets never lower capability. A pair
+ * whose largest system is short in headroom is hopeless and skipped after one evaluation.
+ * Pure and deterministic; runs as a generator so a caller can yield to the event loop.
+ */
+import { evaluatePackage, OUTCOME_ORDER, type Evaluation, type QuoteRequest } from '../acoustics';
+import { toPackageSpec, type LoadedGroup } from '../inventory';
+import { chainsOf, dayCost, groupOf, unitsOverStock, type Chain, type StockCatalogue } from './chains';
+
+export const DEFAULT_BUDGET_MS = 2000;
+export const MAX_SYSTEMS = 5;
+
+export interface Candidate {
+	groups: LoadedGroup[];
+	dayCostMinor: number;
+	evaluation: Evaluation;
+}
+
+export interface Obstacles {
+	/** Bands short (headroom below the margin) even in the largest system of every chain tried. */
+	bandsShort: { hz: number; bestHeadroomDb: number }[];
+	/** The receiver over its limit in the cheapest system that otherwise meets the target. */
+	receiverOver: { name: string; maxTargetDb: number | null } | null;
+	/** Models whose free units the closest system uses up. */
+	modelsRunOut: string[];
+}
+
+export interface SearchResult {
+	clear: Candidate[];
+	closest: Candidate[];
+	complete: boolean;
+	evaluated: number;
+	obstacles: Obstacles | null;
+}
+
+export interface SearchOptions {
+	budgetMs?: number;
+	now?: () => number;
+	/** Yield a progress count every this many evaluations. */
+	yieldEvery?: number;
+}
+
+const rankOf = (c: Candidate) => OUTCOME_ORDER.indexOf(c.evaluation.outcome);
+const closer = (a: Candidate, b: Candidate) => rankOf(a) - rankOf(b) || b.evaluation.headroomDb - a.evaluation.headroomDb || a.dayCostMinor - b.dayCostMinor;
+
+function keep(list: Candidate[], c: Candidate, order: (a: Candidate, b: Candidate) => number): void {
+	list.push(c);
+	list.sort(order);
+	if (list.length > MAX_SYSTEMS) list.pop();
+}
+
+const byCost = (a: Candidate, b: Candidate) => a.dayCostMinor - b.dayCostMinor;
+
+export function* searchSystems(catalogue: StockCatalogue, request: QuoteRequest, options: SearchOptions = {}): Generator<number, SearchResult> {
+	const now = options.now ?? (() => Date.now());
+	const deadline = now() + (options.budgetMs ?? DEFAULT_BUDGET_MS);
+	const yieldEvery = options.yieldEvery ?? 64;
+	const margin = request.marginDb ?? 3;
+	const mains = chainsOf(catalogue, 'main');
+	const subs: (Chain | null)[] = [null, ...chainsOf(catalogue, 'sub')];
+	const maxAmpRate = Math.max(0, ...catalogue.amplifiers.map((a) => a.dayRateMinor));
+	const clear: Candidate[] = [];
+	const closest: Candidate[] = [];
+	const bestBand = new Map<number, number>();
+	let evaluated = 0;
+	let complete = true;
+
+	const bound = () => (clear.length < MAX_SYSTEMS ? Infinity : clear[MAX_SYSTEMS - 1].dayCostMinor);
+	function evaluate(groups: LoadedGroup[], record = true): Candidate | null {
+		if (unitsOverStock(groups, catalogue).length > 0) return null;
+		evaluated++;
+		let evaluation: Evaluation;
+		try {
+			evaluation = evaluatePackage(toPackageSpec({ groups }), request);
+		} catch {
+			return null; // a plan the model refuses is no system
+		}
+		const c = { groups, dayCostMinor: dayCost(groups), evaluation };
+		if (!record) return c;
+		if (evaluation.outcome === 'clear') keep(clear, c, byCost);
+		else keep(closest, c, closer);
+		return c;
+	}
+	const build = (main: Chain, m: number, sub: Chain | null, s: number) =>
+		sub ? [groupOf(main, m, 0), groupOf(sub, s, 1)] : [groupOf(main, m, 0)];
+	const meetsTarget = (c: Candidate) => c.evaluation.verdict === 'clear';
+
+	search: for (const main of mains) {
+		if (main.minDayCost - maxAmpRate >= bound()) break;
+		for (const sub of subs) {
+			const floor = main.minDayCost + (sub?.minDayCost ?? 0) - (sub && sub.amplifier.id === main.amplifier.id ? maxAmpRate : 0);
+			if (floor >= bound()) continue;
+			// The largest system of the pair: if even it is short of the margin, the pair is hopeless.
+			const largest = evaluate(build(main, main.maxCount, sub, sub?.maxCount ?? 0), false);
+			if (largest) for (const b of largest.evaluation.bands) bestBand.set(b.hz, Math.max(bestBand.get(b.hz) ?? -Infinity, b.headroomDb));
+			yield evaluated;
+			if (now() > deadline) {
+				complete = false;
+				break search;
+			}
+			if (!largest) continue;
+			if (!meetsTarget(largest)) {
+				keep(closest, largest, closer);
+				continue;
+			}
+			let sTop = sub?.maxCount ?? 0;
+			const sMin = sub?.minCount ?? 0;
+			for (let m = main.minCount; m <= main.maxCount; m++) {
+				let lowest: number | null = null;
+				for (let s = sMin; s <= sTop; s++) {
+					const groups = build(main, m, sub, s);
+					if (dayCost(groups) >= bound()) break;
+					const c = evaluate(groups);
+					if (evaluated % yieldEvery === 0) {
+						yield evaluated;
+						if (now() > deadline) { complete = false; break search; }
+					}
+					if (c && meetsTarget(c)) { lowest = s; break; }
+				}
+				if (lowest !== null) {
+					if (lowest === sMin) break; // more mains only cost more
+					sTop = lowest - 1; // the staircase: with more mains only fewer subs can be worth a look
+				}
+			}
+		}
+	}
+	return { clear, closest, complete, evaluated, obstacles: clear.length > 0 ? null : obstaclesOf(closest, bestBand, margin, catalogue) };
+}
+
+function obstaclesOf(closest: Candidate[], bestBand: Map<number, number>, margin: number, catalogue: StockCatalogue): Obstacles {
+	const bandsShort = [...bestBand].filter(([, h]) => h < margin).map(([hz, bestHeadroomDb]) => ({ hz, bestHeadroomDb })).sort((a, b) => a.hz - b.hz);
+	const meeting = closest.filter((c) => c.evaluation.verdict === 'clear').sort(byCost)[0];
+	const binding = meeting?.evaluation.limits.bindingReceiver ?? null;
+	const first = closest[0];
+	const modelsRunOut = first
+		? first.groups
+				.filter((g) => g.count * g.stacks >= (catalogue.available[`loudspeaker:${g.loudspeaker.id}`] ?? 0) - (g.stacks - 1))
+				.map((g) => g.loudspeaker.name)
+		: [];
+	return {
+		bandsShort,
+		receiverOver: binding ? { name: binding, maxTargetDb: meeting!.evaluation.limits.maxTargetDb } : null,
+		modelsRunOut
+	};
+}
+
+/** Runs the search to its end (or its time budget) on this thread. */
+export function suggestSystemsNow(catalogue: StockCatalogue, request: QuoteRequest, options: SearchOptions = {}): SearchResult {
+	const steps = searchSystems(catalogue, request, options);
+	for (;;) {
+		const step = steps.next();
+		if (step.done) return step.value;
+	}
+}
