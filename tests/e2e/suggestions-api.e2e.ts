@@ -38,7 +38,7 @@ describe('POST /api/suggestions', () => {
 
 	it('refuses a malformed request with the field errors, as evaluations do', async () => {
 		const response = await api('/api/suggestions', { cookie: await sessionCookie(SALES), method: 'POST', body: { ...request, targetDb: 'loud' } });
-		expect(response.status).toBe(400);
+		expect(response.status).toBe(422);
 		expect(response.json.errors.targetDb).toBeDefined();
 	});
 });

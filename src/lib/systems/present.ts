@@ -1,4 +1,5 @@
 /** A found system as the desk sees it: priced like a package, with a line on why it is offered. Pure. */
+import { formatMoney } from '../quotes/pricing';
 import { evaluateOne, type EvaluationContext, type PackageResult } from '../quotes/evaluate-packages';
 import type { LoadedGroup, LoadedPackage } from '../inventory';
 import type { Candidate, Obstacles } from './search';
@@ -49,7 +50,7 @@ function whyLine(result: PackageResult, index: number, first: PackageResult | un
 	if (index === 0 || !first) return `Cheapest clear system in stock: ${headroom}${limits}`;
 	const more = result.price.totalMinor - first.price.totalMinor;
 	const extra = result.headroomDb - first.headroomDb;
-	return `${extra > 0 ? `${extra.toFixed(1)} dB more headroom` : `${headroom}`} for ${(more / 100).toFixed(2)} more${limits}`;
+	return `${extra > 0 ? `${extra.toFixed(1)} dB more headroom` : `${headroom}`} for ${formatMoney(more, result.price.currency)} more${limits}`;
 }
 
 /** Prices and checks each candidate like a package (the same availability and pricing rules). */
@@ -76,4 +77,13 @@ export function obstacleLines(o: Obstacles | null): string[] {
 		...(o.receiverOver ? [`Receiver ${o.receiverOver.name} would be over its limit at the level asked${o.receiverOver.maxTargetDb !== null ? `; its limit allows at most ${o.receiverOver.maxTargetDb.toFixed(1)} dB at the position` : ''}`] : []),
 		...o.modelsRunOut.map((name) => `${name} runs out on these dates`)
 	];
+}
+
+/** A system's groups as the quote's `system` body (and the request form's hidden field). */
+export function systemFormValue(s: Pick<SuggestedSystem, 'groups'>): string {
+	return JSON.stringify({
+		groups: s.groups.map(({ loudspeakerModelId, count, stacks, amplifierModelId, cabinetsPerChannel, heightM, flown }) => ({
+			loudspeakerModelId, count, stacks, amplifierModelId, cabinetsPerChannel, heightM, flown
+		}))
+	});
 }

@@ -46,7 +46,18 @@ export interface SearchOptions {
 const rankOf = (c: Candidate) => OUTCOME_ORDER.indexOf(c.evaluation.outcome);
 const closer = (a: Candidate, b: Candidate) => rankOf(a) - rankOf(b) || b.evaluation.headroomDb - a.evaluation.headroomDb || a.dayCostMinor - b.dayCostMinor;
 
+/** The cabinets a system puts out, whatever amplifiers drive them: systems the desk would call the same. */
+function cabinetsKey(c: Candidate): string {
+	return c.groups.map((g) => `${g.loudspeaker.id}:${g.count}x${g.stacks}`).join('+');
+}
+
+/** Keeps the best five by `order`, and of systems with the same cabinets only the better one. */
 function keep(list: Candidate[], c: Candidate, order: (a: Candidate, b: Candidate) => number): void {
+	const same = list.findIndex((other) => cabinetsKey(other) === cabinetsKey(c));
+	if (same >= 0) {
+		if (order(c, list[same]) >= 0) return;
+		list.splice(same, 1);
+	}
 	list.push(c);
 	list.sort(order);
 	if (list.length > MAX_SYSTEMS) list.pop();
