@@ -9,6 +9,7 @@
 import { fileURLToPath } from 'node:url';
 import { acousticsRows, runAcousticsBench } from './acoustics.bench';
 import { runLevelMapBench } from './level-map.bench';
+import { runSuggestionsBench, suggestionsRows } from './suggestions.bench';
 import { httpRows, LOAD, measureHttp } from './http-suite';
 import type { LoadResult } from './http-load';
 import { pageWeight, type PageWeight } from './page-weight';
@@ -58,6 +59,8 @@ async function main(): Promise<void> {
 	const acoustics = runAcousticsBench();
 	log('level map (levelGrid + contours, 100 × 100, in this process)');
 	const levelMaps = runLevelMapBench();
+	log('suggestion search (demo-sized and 40-model catalogues, in this process)');
+	const suggestions = runSuggestionsBench();
 
 	log('setting up the bench world from nothing (MariaDB, migrate, seed, fakes, build, boot)…');
 	let world: World;
@@ -97,6 +100,7 @@ async function main(): Promise<void> {
 		},
 		{ metric: 'app boot (node build → /api/health 200)', value: world.bootS, unit: 's' },
 		...acousticsRows(acoustics),
+		...suggestionsRows(suggestions),
 		...levelMaps.map((m) => ({
 			metric: m.name,
 			value: m.opsPerSec,
@@ -153,7 +157,8 @@ function inProcessOnly(): void {
 	const started = Date.now();
 	log('acoustic model (in this process only)');
 	const acoustics = runAcousticsBench();
-	const rows = acousticsRows(acoustics);
+	log('suggestion search (in this process only)');
+	const rows = [...acousticsRows(acoustics), ...suggestionsRows(runSuggestionsBench())];
 	console.log(
 		`\nThrowline bench, in-process rows — ${new Date().toISOString()} (${((Date.now() - started) / 1000).toFixed(0)} s)\n`
 	);
