@@ -38,9 +38,9 @@ export function systemGroups(groups: readonly LoadedGroup[]): SystemGroup[] {
 	}));
 }
 
-/** A name from its lines: "4 × Top A + 2 × Sub B". */
+/** A name from its lines: "2 × 2 Top A + 2 × Sub B" (stacks × cabinets each, when there are two stacks). */
 export function systemName(groups: readonly LoadedGroup[]): string {
-	return groups.map((g) => `${g.count * g.stacks} × ${g.loudspeaker.name}`).join(' + ');
+	return groups.map((g) => `${g.stacks > 1 ? `${g.stacks} × ${g.count}` : g.count} × ${g.loudspeaker.name}`).join(' + ');
 }
 
 function whyLine(result: PackageResult, index: number, first: PackageResult | undefined): string {

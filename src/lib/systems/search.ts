@@ -120,16 +120,31 @@ export function* searchSystems(catalogue: StockCatalogue, request: QuoteRequest,
 			let sTop = sub?.maxCount ?? 0;
 			const sMin = sub?.minCount ?? 0;
 			for (let m = main.minCount; m <= main.maxCount; m++) {
+				// Fewest subs that make this main count clear: a binary search, since more never lowers capability.
+				let hi = sTop;
+				while (hi >= sMin && dayCost(build(main, m, sub, hi)) >= bound()) hi--;
+				let lo = sMin;
 				let lowest: number | null = null;
-				for (let s = sMin; s <= sTop; s++) {
-					const groups = build(main, m, sub, s);
-					if (dayCost(groups) >= bound()) break;
-					const c = evaluate(groups);
+				let found: Candidate | null = null;
+				while (lo <= hi) {
+					const mid = (lo + hi) >> 1;
+					const c = evaluate(build(main, m, sub, mid), false);
 					if (evaluated % yieldEvery === 0) {
 						yield evaluated;
 						if (now() > deadline) { complete = false; break search; }
 					}
-					if (c && meetsTarget(c)) { lowest = s; break; }
+					if (c && meetsTarget(c)) {
+						lowest = mid;
+						found = c;
+						hi = mid - 1;
+					} else {
+						if (c) keep(closest, c, closer);
+						lo = mid + 1;
+					}
+				}
+				if (found) {
+					if (found.evaluation.outcome === 'clear') keep(clear, found, byCost);
+					else keep(closest, found, closer);
 				}
 				if (lowest !== null) {
 					if (lowest === sMin) break; // more mains only cost more

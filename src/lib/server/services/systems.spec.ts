@@ -27,7 +27,7 @@ describe('a quote with a composed system', () => {
 	it('is saved with its groups and priced from its own lines, with no package', async () => {
 		const { quote, loudspeaker } = await composedQuote();
 		expect(quote.result.billOfMaterials.loudspeakers).toEqual([expect.objectContaining({ modelId: loudspeaker.id, count: 2 })]);
-		expect(quote.result.packageName).toBe(`2 × ${loudspeaker.name}`);
+		expect(quote.result.packageName).toBe(`2 × 1 × ${loudspeaker.name}`);
 		expect(quote.result.price.totalMinor).toBeGreaterThan(0);
 	});
 
