@@ -99,9 +99,15 @@ export function* searchSystems(catalogue: StockCatalogue, request: QuoteRequest,
 		sub ? [groupOf(main, m, 0), groupOf(sub, s, 1)] : [groupOf(main, m, 0)];
 	const meetsTarget = (c: Candidate) => c.evaluation.verdict === 'clear';
 
-	search: for (const main of mains) {
-		if (main.minDayCost - maxAmpRate >= bound()) break;
-		for (const sub of subs) {
+	// Pairs of chains in ascending order of their cheapest members' sum (the pair's floor, up to
+	// one shared amplifier): cheap systems are tried first, so the bound tightens early and a search
+	// stopped at its budget holds the cheapest found so far.
+	const pairs = new PairQueue(mains.map((m) => m.minDayCost), subs.map((s) => s?.minDayCost ?? 0));
+	search: for (let next = pairs.pop(); next; next = pairs.pop()) {
+		if (next.sum - maxAmpRate >= bound()) break;
+		const main = mains[next.i];
+		{
+			const sub = subs[next.j];
 			const floor = main.minDayCost + (sub?.minDayCost ?? 0) - (sub && sub.amplifier.id === main.amplifier.id ? maxAmpRate : 0);
 			if (floor >= bound()) continue;
 			// The largest system of the pair: if even it is short of the margin, the pair is hopeless.
@@ -154,6 +160,55 @@ export function* searchSystems(catalogue: StockCatalogue, request: QuoteRequest,
 		}
 	}
 	return { clear, closest, complete, evaluated, obstacles: clear.length > 0 ? null : obstaclesOf(closest, bestBand, margin, catalogue) };
+}
+
+/** Pairs (i, j) of two ascending cost lists, popped in ascending order of a[i] + b[j]. */
+class PairQueue {
+	private heap: { i: number; j: number; sum: number }[] = [];
+	constructor(
+		private readonly a: readonly number[],
+		private readonly b: readonly number[]
+	) {
+		if (b.length > 0) a.forEach((cost, i) => this.push({ i, j: 0, sum: cost + b[0] }));
+	}
+	pop(): { i: number; j: number; sum: number } | undefined {
+		const top = this.heap[0];
+		if (!top) return undefined;
+		const last = this.heap.pop()!;
+		if (this.heap.length > 0) {
+			this.heap[0] = last;
+			this.down(0);
+		}
+		if (top.j + 1 < this.b.length) this.push({ i: top.i, j: top.j + 1, sum: this.a[top.i] + this.b[top.j + 1] });
+		return top;
+	}
+	private before(x: { i: number; j: number; sum: number }, y: { i: number; j: number; sum: number }): boolean {
+		return x.sum < y.sum || (x.sum === y.sum && (x.i < y.i || (x.i === y.i && x.j < y.j)));
+	}
+	private push(item: { i: number; j: number; sum: number }): void {
+		const h = this.heap;
+		h.push(item);
+		let k = h.length - 1;
+		while (k > 0) {
+			const parent = (k - 1) >> 1;
+			if (!this.before(h[k], h[parent])) break;
+			[h[k], h[parent]] = [h[parent], h[k]];
+			k = parent;
+		}
+	}
+	private down(k: number): void {
+		const h = this.heap;
+		for (;;) {
+			const l = 2 * k + 1;
+			const r = l + 1;
+			let m = k;
+			if (l < h.length && this.before(h[l], h[m])) m = l;
+			if (r < h.length && this.before(h[r], h[m])) m = r;
+			if (m === k) return;
+			[h[k], h[m]] = [h[m], h[k]];
+			k = m;
+		}
+	}
 }
 
 function obstaclesOf(closest: Candidate[], bestBand: Map<number, number>, margin: number, catalogue: StockCatalogue): Obstacles {
