@@ -92,7 +92,7 @@ async function reevaluateFestival(site: Site, transaction: Transaction) {
 	const quote = client && (await Quote.findOne({ where: { clientId: client.id, eventName: 'Riverside food festival, main stage' }, transaction }));
 	if (!quote) return;
 	const version = await QuoteVersion.findOne({ where: { quoteId: quote.id, version: quote.currentVersion }, transaction });
-	if (!version) return;
+	if (!version || version.packageId === null) return; // a demo quote on a composed system keeps its own evaluation
 	// The park's receivers carry the licence limits now; the single on-axis boundary is dropped.
 	const { boundary: _b, ...rest } = version.request;
 	const request: QuoteRequestInput = { ...rest, siteId: site.id };

@@ -12,6 +12,7 @@ import { runLevelMapBench } from './level-map.bench';
 import { catalogueRows, measureCatalogues, type CatalogueResult } from './catalogue-suite';
 import { clusterRows, measureCluster, stopCluster } from './cluster-load';
 import { EVALUATION_BODY, httpRows, LOAD, measureHttp } from './http-suite';
+import { runSuggestionsBench, suggestionsRows } from './suggestions.bench';
 import type { LoadResult } from './http-load';
 import { pageWeight, type PageWeight } from './page-weight';
 import { stopAll } from './proc';
@@ -64,6 +65,8 @@ async function main(): Promise<void> {
 	const acoustics = runAcousticsBench();
 	log('level map (levelGrid + contours, 100 × 100, in this process)');
 	const levelMaps = runLevelMapBench();
+	log('suggestion search (demo-sized and 40-model catalogues, in this process)');
+	const suggestions = runSuggestionsBench();
 
 	log('setting up the bench world from nothing (MariaDB, migrate, seed, fakes, build, boot)…');
 	let world: World;
@@ -117,6 +120,7 @@ async function main(): Promise<void> {
 		},
 		{ metric: 'app boot (node build → /api/health 200)', value: world.bootS, unit: 's' },
 		...acousticsRows(acoustics),
+		...suggestionsRows(suggestions),
 		...levelMaps.map((m) => ({
 			metric: m.name,
 			value: m.opsPerSec,
@@ -178,7 +182,8 @@ function inProcessOnly(): void {
 	const started = Date.now();
 	log('acoustic model (in this process only)');
 	const acoustics = runAcousticsBench();
-	const rows = acousticsRows(acoustics);
+	log('suggestion search (in this process only)');
+	const rows = [...acousticsRows(acoustics), ...suggestionsRows(runSuggestionsBench())];
 	console.log(
 		`\nThrowline bench, in-process rows — ${new Date().toISOString()} (${((Date.now() - started) / 1000).toFixed(0)} s)\n`
 	);

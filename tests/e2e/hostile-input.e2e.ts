@@ -74,6 +74,7 @@ const TARGETS: Record<string, Target> = {
 	'POST /api/users': { as: 'admin', body: 'json', schema: userCreateSchema },
 	'PATCH /api/users/[id=id]': { as: 'admin', body: 'json', schema: userUpdateSchema },
 	'POST /api/evaluations': { as: 'sales', body: 'json', schema: evaluationRequestSchema },
+	'POST /api/suggestions': { as: 'sales', body: 'json', schema: evaluationRequestSchema },
 	'POST /api/clients': { as: 'sales', body: 'json', schema: clientSchema },
 	'PATCH /api/clients/[id=id]': { as: 'sales', body: 'json', schema: clientUpdateSchema },
 	// Open to the signed-out: asking for a link is how they get back in.

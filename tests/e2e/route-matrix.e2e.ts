@@ -53,6 +53,7 @@ const TABLE: Record<string, Row> = {
 	'POST /api/users':                           { out: S, admin: 'allowed', warehouse: D, sales: D, client: D, stranger: D },
 	'PATCH /api/users/[id=id]':                  { out: S, admin: 'allowed', warehouse: D, sales: D, client: D, stranger: D },
 	'POST /api/evaluations':                     { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
+	'POST /api/suggestions':                     { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
 
 	'GET /api/sites':                            { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
 	'POST /api/sites':                           { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { QUOTE_ACTIONS } from '../quotes/states';
 import { evaluationRequestSchema, type QuoteRequestInput } from './evaluation';
+import { systemSchema } from './systems';
 
 export const newClientSchema = z.object({
 	name: z.string().trim().min(2, 'Enter the organisation’s name').max(160),
@@ -9,9 +10,15 @@ export const newClientSchema = z.object({
 	phone: z.string().trim().max(40).optional()
 });
 
+/** A quote offers one package or one system, never both and never neither. */
+const onePackageOrSystem = (q: { packageId?: number; system?: unknown }) => (q.packageId === undefined) !== (q.system === undefined);
+const choosePackage = { path: ['packageId'], message: 'Choose a package or a system' };
+
 const quoteFields = {
 	eventName: z.string().trim().min(2, 'Name the event').max(160),
-	packageId: z.number().int().positive({ error: 'Choose a package' }),
+	packageId: z.number().int().positive({ error: 'Choose a package' }).optional(),
+	/** A system composed or suggested for this quote, instead of a package. */
+	system: systemSchema.optional(),
 	notes: z.string().trim().max(4000).optional(),
 	request: evaluationRequestSchema
 };
@@ -26,11 +33,12 @@ export const quoteCreateSchema = z
 	.refine((q) => (q.clientId === undefined) !== (q.newClient === undefined), {
 		path: ['clientId'],
 		message: 'Choose an existing client or enter a new one'
-	});
+	})
+	.refine(onePackageOrSystem, choosePackage);
 export type QuoteCreateInput = z.infer<typeof quoteCreateSchema>;
 
 /** A revision keeps the client; everything else may change. */
-export const quoteReviseSchema = z.object(quoteFields);
+export const quoteReviseSchema = z.object(quoteFields).refine(onePackageOrSystem, choosePackage);
 export type QuoteReviseInput = z.infer<typeof quoteReviseSchema>;
 
 /**
@@ -71,7 +79,9 @@ export const requestFormSchema = z.object({
 	boundaryWeighting: z.enum(['A', 'C', 'Z']).default('A'),
 	siteId: z.number().int().positive().nullable().default(null),
 	notes: z.string().max(4000).default(''),
-	packageId: z.number().int().positive().nullable().default(null)
+	packageId: z.number().int().positive().nullable().default(null),
+	/** A chosen suggested or composed system, as JSON of its groups ('' when a package is chosen). */
+	system: z.string().max(4000).default('')
 });
 export type RequestForm = z.infer<typeof requestFormSchema>;
 
@@ -113,6 +123,15 @@ export function formFieldOf(path: string): keyof RequestForm | null {
 	return last in requestFormSchema.shape ? (last as keyof RequestForm) : null;
 }
 
+/** The hidden system field back into groups; anything unreadable is left for the schema to refuse. */
+function parseSystem(text: string): unknown {
+	try {
+		return JSON.parse(text);
+	} catch {
+		return { groups: [] };
+	}
+}
+
 /** The request form as a quote body for the API (validated by quoteCreateSchema). */
 export function quoteBodyFromForm(f: RequestForm): Record<string, unknown> {
 	return {
@@ -120,7 +139,7 @@ export function quoteBodyFromForm(f: RequestForm): Record<string, unknown> {
 			? { clientId: f.clientId }
 			: { newClient: { name: f.newClientName, contactName: f.newClientContact, email: f.newClientEmail } }),
 		eventName: f.eventName,
-		packageId: f.packageId ?? 0,
+		...(f.system ? { system: parseSystem(f.system) } : { packageId: f.packageId ?? 0 }),
 		...(f.notes ? { notes: f.notes } : {}),
 		request: evaluationBodyFromForm(f)
 	};

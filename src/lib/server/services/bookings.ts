@@ -23,16 +23,7 @@ export async function reserveStockForQuote(quoteId: number, version: number, tra
 	const quoted = await QuoteVersion.findOne({ where: { quoteId, version }, transaction });
 	if (!quoted) throw new Error(`quote ${quoteId} has no version ${version}`);
 	const bom = quoted.evaluation.billOfMaterials;
-	const needed: Partial<Record<ModelKey, number>> = {};
-	const names = new Map<ModelKey, string>();
-	for (const l of bom.loudspeakers) {
-		needed[`loudspeaker:${l.modelId}`] = l.count;
-		names.set(`loudspeaker:${l.modelId}`, l.name);
-	}
-	for (const a of bom.amplifiers) {
-		needed[`amplifier:${a.modelId}`] = a.count;
-		names.set(`amplifier:${a.modelId}`, a.name);
-	}
+	const { needed, names } = linesOf(quoted);
 
 	const lock = { transaction, lock: Transaction.LOCK.UPDATE, order: [['id', 'ASC']] as [string, string][] };
 	await LoudspeakerModel.findAll({ where: { id: { [Op.in]: bom.loudspeakers.map((l) => l.modelId) } }, ...lock });
@@ -62,6 +53,35 @@ export async function reserveStockForQuote(quoteId: number, version: number, tra
 	);
 	await bumpStamp('bookings', transaction);
 	return { ok: true, bookingId };
+}
+
+/** The units a version's package or system takes, per model, with the models' names. */
+function linesOf(quoted: QuoteVersion): { needed: Partial<Record<ModelKey, number>>; names: Map<ModelKey, string> } {
+	const bom = quoted.evaluation.billOfMaterials;
+	const needed: Partial<Record<ModelKey, number>> = {};
+	const names = new Map<ModelKey, string>();
+	for (const l of bom.loudspeakers) {
+		needed[`loudspeaker:${l.modelId}`] = l.count;
+		names.set(`loudspeaker:${l.modelId}`, l.name);
+	}
+	for (const a of bom.amplifiers) {
+		needed[`amplifier:${a.modelId}`] = a.count;
+		names.set(`amplifier:${a.modelId}`, a.name);
+	}
+	return { needed, names };
+}
+
+/**
+ * What a quote version would be short of if it were booked now, read without locks: the early
+ * refusal at acceptance. The reservation at deposit re-checks under row locks, so this never
+ * guarantees stock; it only stops a client accepting what is already gone.
+ */
+export async function shortfallsNow(quoteId: number, version: number): Promise<(Shortfall & { name: string })[]> {
+	const quoted = await QuoteVersion.findOne({ where: { quoteId, version } });
+	if (!quoted) return [];
+	const { needed, names } = linesOf(quoted);
+	const [inService, reservations] = await Promise.all([unitsInService(), reservationsOverlapping(quoted.startDate, quoted.endDate, { excludeQuoteId: quoteId })]);
+	return checkAvailability(needed, inService, reservations, quoted.startDate, quoted.endDate).shortfalls.map((s) => ({ ...s, name: names.get(s.model) ?? s.model }));
 }
 
 /** Frees the stock of a cancelled hire. */

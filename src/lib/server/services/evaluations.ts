@@ -1,4 +1,5 @@
 import { MODEL_ASSUMPTIONS, type QuoteRequest } from '$lib/acoustics';
+import type { LoadedPackage } from '$lib/inventory/types';
 import { evaluatePackages, type PackageResult } from '$lib/quotes/evaluate-packages';
 import { toModelRequest } from '$lib/quotes/request';
 import type { QuoteRequestInput } from '$lib/schemas/evaluation';
@@ -34,16 +35,17 @@ export async function resolveSite(input: Pick<QuoteRequestInput, 'siteId' | 'sit
 
 /**
  * Evaluates every active package in stock against an organiser's request, ranked for the desk.
+ * `options.packages` evaluates those (e.g. a composed system) instead of the stored packages.
  * `options.site` evaluates against a given snapshot instead of resolving the request's site.
  */
 export async function evaluateForDesk(
 	input: QuoteRequestInput,
-	options: { packageIds?: number[]; excludeQuoteId?: number; site?: SiteSnapshot | null } = {}
+	options: { packageIds?: number[]; packages?: LoadedPackage[]; excludeQuoteId?: number; site?: SiteSnapshot | null } = {}
 ): Promise<DeskEvaluation> {
 	const [settings, programmeRow, packages, inService, reservations, site] = await Promise.all([
 		getSettings(),
 		findProgramme(input.programme),
-		loadedPackages({ activeOnly: true, ids: options.packageIds }),
+		options.packages ?? loadedPackages({ activeOnly: true, ids: options.packageIds }),
 		// Read through the short-lived cache: the desk asks again on every keystroke. Reserving stock
 		// never uses these; it reads under row locks (bookings.ts).
 		cached(`${CATALOGUE}units`, () => unitsInService()),

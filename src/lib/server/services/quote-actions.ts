@@ -14,7 +14,7 @@ import { DomainError } from './errors';
 import { issueStripeInvoice, saveIssuedInvoice, voidOrphanInvoice, type IssuedInvoice } from './invoices';
 import { quoteDocumentFor } from './quote-document';
 import { getQuote, type QuoteDetail } from './quotes';
-import { releaseBooking } from './bookings';
+import { releaseBooking, shortfallsNow } from './bookings';
 import { getSettings, type Settings } from './settings';
 
 // Deposit and confirmation follow a paid invoice; nobody moves a quote there by hand.
@@ -62,6 +62,14 @@ function refuseEarly(before: QuoteDetail, input: QuoteActionInput, actor: Sessio
 	}
 }
 
+/** A quote whose units were booked for another hire meanwhile cannot be accepted as it stands. */
+async function refuseShortStock(before: QuoteDetail): Promise<void> {
+	const short = await shortfallsNow(before.id, before.version);
+	if (short.length === 0) return;
+	const lines = short.map((s) => `${s.name}: ${s.missing} short`).join('; ');
+	throw new DomainError(409, `Some of this system's equipment has been booked for another hire on these dates (${lines}). Ask us for a fresh quote.`);
+}
+
 export async function applyQuoteAction(id: number, input: QuoteActionInput | QuoteAction, actor: SessionUser): Promise<ActionOutcome> {
 	const request: QuoteActionInput = typeof input === 'string' ? { action: input } : input;
 	const { action } = request;
@@ -72,6 +80,7 @@ export async function applyQuoteAction(id: number, input: QuoteActionInput | Quo
 		throw new DomainError(409, `A quote that is ${before.status} cannot be given “${action}”.`);
 	}
 	refuseEarly(before, request, actor);
+	if (action === 'accept') await refuseShortStock(before);
 
 	// Money first, outside our transaction: if the payment service is down nothing below happens.
 	const deposit = action === 'accept' ? await issueStripeInvoice(before, 'deposit') : null;

@@ -16,6 +16,7 @@ import { invoicesFor, type InvoiceRow } from './invoice-rows';
 import type { SessionUser } from '../users';
 import { DomainError } from './errors';
 import { evaluateForDesk } from './evaluations';
+import { loadSystem } from './systems';
 
 export interface QuoteSummary {
 	id: number;
@@ -67,10 +68,12 @@ interface Snapshot {
 
 /**
  * Prices and evaluates one package for the request now, against the site as it is now; the version
- * keeps both. A refusal to quote is a 422 on packageId.
+ * keeps both. A composed or suggested system is evaluated the same way, from its groups.
+ * A refusal to quote is a 422 on packageId.
  */
-async function snapshot(request: QuoteRequestInput, packageId: number, quoteId?: number): Promise<Snapshot> {
-	const { results, site } = await evaluateForDesk(request, { packageIds: [packageId], excludeQuoteId: quoteId });
+async function snapshot(request: QuoteRequestInput, offer: Pick<QuoteReviseInput, 'packageId' | 'system'>, quoteId?: number): Promise<Snapshot> {
+	const packages = offer.system ? [await loadSystem(offer.system)] : undefined;
+	const { results, site } = await evaluateForDesk(request, { packageIds: [offer.packageId ?? 0], packages, excludeQuoteId: quoteId });
 	if (results.length === 0) {
 		throw new DomainError(422, 'That package is not available for quoting.', { packageId: ['Choose an active package'] });
 	}
@@ -101,7 +104,7 @@ async function clientFor(input: QuoteCreateInput, transaction: Transaction): Pro
 }
 
 export async function createQuote(input: QuoteCreateInput, actor: SessionUser): Promise<QuoteDetail> {
-	const evaluated = await snapshot(input.request, input.packageId);
+	const evaluated = await snapshot(input.request, input);
 	const quoteId = await db().transaction(async (transaction) => {
 		const clientId = await clientFor(input, transaction);
 		const quote = await Quote.create({ clientId, eventName: input.eventName, createdById: actor.id }, { transaction });
@@ -113,7 +116,7 @@ export async function createQuote(input: QuoteCreateInput, actor: SessionUser): 
 
 /** Saves the edited request as a new version; a sent quote goes back to draft until sent again. */
 export async function reviseQuote(id: number, input: QuoteReviseInput, actor: SessionUser): Promise<QuoteDetail> {
-	const evaluated = await snapshot(input.request, input.packageId, id);
+	const evaluated = await snapshot(input.request, input, id);
 	await db().transaction(async (transaction) => {
 		const quote = await Quote.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
 		if (!quote) throw new DomainError(404, 'No such quote.');
@@ -142,7 +145,8 @@ async function writeVersion(
 		{
 			quoteId,
 			version,
-			packageId: input.packageId,
+			packageId: input.packageId ?? null,
+			system: input.system ?? null,
 			startDate: input.request.startDate,
 			endDate: input.request.endDate,
 			request: input.request,

@@ -10,13 +10,17 @@ import type { PackageResult } from '../../../quotes/evaluate-packages';
 import type { Price } from '../../../quotes/pricing';
 import type { QuoteRequestInput } from '../../../schemas/evaluation';
 import type { SiteSnapshot } from '../../../schemas/sites';
+import type { SystemInput } from '../../../schemas/systems';
 
 /** One saved state of a quote: the request, the chosen package and the snapshot it was priced on. */
 export class QuoteVersion extends Model<InferAttributes<QuoteVersion>, InferCreationAttributes<QuoteVersion>> {
 	declare id: CreationOptional<number>;
 	declare quoteId: number;
 	declare version: number;
-	declare packageId: number;
+	/** Null when the version offers a composed or suggested system instead of a package. */
+	declare packageId: number | null;
+	/** The system's groups, when the version offers one. */
+	declare system: CreationOptional<SystemInput | null>;
 	declare startDate: string;
 	declare endDate: string;
 	declare request: QuoteRequestInput;
@@ -38,7 +42,8 @@ export class QuoteVersion extends Model<InferAttributes<QuoteVersion>, InferCrea
 				id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
 				quoteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
 				version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-				packageId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+				packageId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+				system: { type: DataTypes.JSON, allowNull: true },
 				startDate: { type: DataTypes.DATEONLY, allowNull: false },
 				endDate: { type: DataTypes.DATEONLY, allowNull: false },
 				request: { type: DataTypes.JSON, allowNull: false },

@@ -3,7 +3,7 @@ import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { isEditable } from '$lib/quotes/states';
 import { requireCapability } from '$lib/server/auth/guards';
-import { evaluationBodyFromForm, formFromRequest, quoteReviseSchema, requestFormSchema } from '$lib/schemas/quotes';
+import { evaluationBodyFromForm, formFromRequest, quoteBodyFromForm, quoteReviseSchema, requestFormSchema } from '$lib/schemas/quotes';
 import { orHttpError } from '$lib/server/services/errors';
 import { requestFormOptions, saveFromForm } from '$lib/server/services/quote-form';
 import { getQuote, reviseQuote } from '$lib/server/services/quotes';
@@ -28,12 +28,11 @@ export const actions: Actions = {
 	save: async (event) => {
 		const user = requireCapability(event, 'quotes:write');
 		const id = Number(event.params.id);
-		const toBody = (f: Parameters<typeof evaluationBodyFromForm>[0]) => ({
-			eventName: f.eventName,
-			packageId: f.packageId ?? 0,
-			...(f.notes ? { notes: f.notes } : {}),
-			request: evaluationBodyFromForm(f)
-		});
+		// The same body as a new quote's, without the client (a revision keeps it).
+		const toBody = (f: Parameters<typeof evaluationBodyFromForm>[0]) => {
+			const { clientId: _c, newClient: _n, ...body } = quoteBodyFromForm(f);
+			return body;
+		};
 		return saveFromForm(event.request, quoteReviseSchema, toBody, (input) => reviseQuote(id, input, user));
 	}
 };

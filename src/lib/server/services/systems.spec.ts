@@ -1,0 +1,67 @@
+import { describe, expect, it } from 'vitest';
+import { useTestDatabase } from '../../../../tests/helpers/db';
+import { makeClientUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
+import { BOOKINGS, invalidate } from '../cache';
+import { Booking, BookingLine } from '../db/models';
+import { applyQuoteAction } from './quote-actions';
+import { createQuote, getQuote } from './quotes';
+import { reserveStockForQuote, reservationTransaction } from './bookings';
+
+useTestDatabase();
+
+const request = {
+	targetDb: 85, weighting: 'A' as const, distance: 10, distanceUnit: 'm' as const, programme: 'speech',
+	temperatureC: 20, humidityPct: 50, startDate: '2031-09-10', endDate: '2031-09-11'
+};
+
+async function composedQuote() {
+	const desk = await makeStaffUser();
+	const { client } = await makeClientUser();
+	const { loudspeaker, amplifier, pkg } = await makeStockedPackage({ cabinets: 2, units: 2 });
+	const system = { groups: [{ loudspeakerModelId: loudspeaker.id, count: 1, stacks: 2 as const, amplifierModelId: amplifier.id, cabinetsPerChannel: 1 }] };
+	const quote = await createQuote({ clientId: client.id, eventName: 'Composed system fixture', system, request }, desk);
+	return { desk, quote, loudspeaker, pkg };
+}
+
+describe('a quote with a composed system', () => {
+	it('is saved with its groups and priced from its own lines, with no package', async () => {
+		const { quote, loudspeaker } = await composedQuote();
+		expect(quote.result.billOfMaterials.loudspeakers).toEqual([expect.objectContaining({ modelId: loudspeaker.id, count: 2 })]);
+		expect(quote.result.packageName).toBe(`2 × 1 × ${loudspeaker.name}`);
+		expect(quote.result.price.totalMinor).toBeGreaterThan(0);
+	});
+
+	it('books its lines like a package, and is refused at acceptance once its units were booked meanwhile', async () => {
+		const { desk, quote, loudspeaker, pkg } = await composedQuote();
+		await applyQuoteAction(quote.id, 'send', desk);
+		const other = await createQuote({ clientId: quote.clientId, eventName: 'Other hire', packageId: pkg.id, request }, desk);
+		const booking = await Booking.create({ quoteId: other.id, status: 'confirmed', startDate: request.startDate, endDate: request.endDate });
+		await BookingLine.create({ bookingId: booking.id, modelType: 'loudspeaker', modelId: loudspeaker.id, quantity: 1 });
+		invalidate(BOOKINGS);
+
+		await expect(applyQuoteAction(quote.id, 'accept', desk)).rejects.toMatchObject({
+			status: 409,
+			message: expect.stringContaining(`${loudspeaker.name}: 1 short`)
+		});
+		expect((await getQuote(quote.id, desk)).status).toBe('sent');
+		const reservation = await reservationTransaction((t) => reserveStockForQuote(quote.id, 1, t));
+		expect(reservation.ok).toBe(false);
+
+		await booking.update({ status: 'cancelled' });
+		invalidate(BOOKINGS);
+		const booked = await reservationTransaction((t) => reserveStockForQuote(quote.id, 1, t));
+		expect(booked.ok).toBe(true);
+		const lines = await BookingLine.findAll({ where: { bookingId: (booked as { bookingId: number }).bookingId } });
+		expect(lines.find((l) => l.modelType === 'loudspeaker')?.quantity).toBe(2);
+	});
+
+	it('refuses models that are not in the inventory with a field error', async () => {
+		const desk = await makeStaffUser();
+		const { client } = await makeClientUser();
+		const system = { groups: [{ loudspeakerModelId: 999999, count: 1, stacks: 1 as const, amplifierModelId: 999999, cabinetsPerChannel: 1 }] };
+		await expect(createQuote({ clientId: client.id, eventName: 'Nothing', system, request }, desk)).rejects.toMatchObject({
+			status: 422,
+			errors: { 'system.groups.0.loudspeakerModelId': expect.any(Array) }
+		});
+	});
+});

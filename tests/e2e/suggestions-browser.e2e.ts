@@ -1,0 +1,58 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
+
+let browser: Browser;
+beforeAll(async () => {
+	browser = await launchBrowser();
+});
+afterAll(async () => {
+	await browser?.close();
+});
+
+const CLIENT_EMAIL = 'organiser@millbrook-riverside.test';
+
+describe('suggesting a system from stock, end to end', () => {
+	let quoteUrl = '';
+	let systemName = '';
+
+	it('sales asks for suggestions, picks one, and saves and sends the quote with it', async () => {
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, 'sales@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/quotes/new`);
+		await page.getByLabel('Client', { exact: true }).selectOption({ label: 'Millbrook Riverside Food Festival' });
+		await page.getByLabel('Event', { exact: true }).fill('Riverside talks, suggested system');
+		await page.getByLabel('Hire from').fill('2032-09-03');
+		await page.getByLabel('Hire until').fill('2032-09-04');
+		await page.getByLabel(/Level at the position/).fill('98');
+		await page.getByLabel(/Distance from the system to the position/).fill('30');
+		await page.getByText(/packages checked/).waitFor();
+
+		await page.getByRole('button', { name: 'Suggest systems from stock' }).click();
+		await page.getByText(/^Checked \d+ systems/).waitFor({ timeout: 20_000 });
+		const first = page.getByTestId('pick-system').first();
+		await first.check();
+		systemName = (await page.getByTestId('chosen-system').locator('strong').textContent())!;
+		expect(systemName).toMatch(/ × /);
+		await screenshot(page, 'quote-suggested-1280');
+
+		await page.getByRole('button', { name: `Save quote with ${systemName}` }).click();
+		await page.waitForURL(/\/quotes\/\d+$/);
+		quoteUrl = page.url();
+		await page.getByText(systemName).first().waitFor();
+		await page.getByRole('button', { name: 'Send to client' }).click();
+		await page.getByText('Sent: the client has the quote by e-mail.').waitFor();
+		await page.close();
+	}, 90_000);
+
+	it('the client sees the composed system’s lines on the quote document', async () => {
+		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+		await signIn(page, CLIENT_EMAIL);
+		await page.goto(`${quoteUrl}/print`);
+		const loudspeaker = systemName.split(' + ')[0].replace(/^[\d ×]+/, '').trim();
+		await page.getByText(loudspeaker).first().waitFor();
+		expect(await page.textContent('body')).toContain(loudspeaker);
+		await page.close();
+	}, 60_000);
+});
