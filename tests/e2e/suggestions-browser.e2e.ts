@@ -49,6 +49,7 @@ describe('suggesting a system from stock, end to end', () => {
 	it('the client sees the composed system’s lines on the quote document', async () => {
 		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
 		await signIn(page, CLIENT_EMAIL);
+		await page.waitForURL(`${BASE_URL}/`); // signed in before the document is asked for
 		await page.goto(`${quoteUrl}/print`);
 		const loudspeaker = systemName.split(' + ')[0].replace(/^[\d ×]+/, '').trim();
 		await page.getByText(loudspeaker).first().waitFor();
