@@ -35,7 +35,7 @@ describe('booking the last units across processes', () => {
 		}
 		const hosted: string[] = [];
 		for (const id of ids) {
-			const accepted = await call(PROXY, `/api/quotes/${id}/actions`, { cookie: clientCookie, method: 'POST', body: { action: 'accept' } });
+			const accepted = await call(PROXY, `/api/quotes/${id}/actions`, { cookie: clientCookie, method: 'POST', body: { action: 'accept', acceptTerms: true } });
 			expect(accepted.status, accepted.text).toBe(200);
 			hosted.push((accepted.json.quote.invoices as { kind: string; hostedUrl: string }[]).find((i) => i.kind === 'deposit')!.hostedUrl);
 		}

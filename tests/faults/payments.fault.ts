@@ -72,7 +72,7 @@ describe('the payment service fails or is slow when the client accepts', () => {
 					'x-sveltekit-action': 'true',
 					'content-type': 'application/x-www-form-urlencoded'
 				},
-				body: ''
+				body: 'acceptTerms=on' // the client ticks the terms, as the page asks
 			},
 			10_000
 		);
