@@ -1,6 +1,5 @@
 import { randomBytes } from 'node:crypto';
 import { UniqueConstraintError } from 'sequelize';
-import type { Role } from '$lib/permissions';
 import type { UserCreateInput, UserUpdateInput } from '$lib/schemas/users';
 import { hashPassword, verifyPassword } from '../auth/password';
 import { Client, User } from '../db/models';
