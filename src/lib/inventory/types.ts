@@ -1,7 +1,7 @@
 import type { DirectivityTable } from '$lib/schemas/directivity';
 import type { AmplifierInput } from '$lib/schemas/inventory-amplifiers';
 import type { LoudspeakerInput } from '$lib/schemas/inventory-loudspeakers';
-import type { UnitStatus } from '$lib/schemas/inventory-units';
+import type { StockUnitStatus } from '$lib/schemas/inventory-units';
 
 /** Plain rows as the inventory services return them (dates as ISO strings). */
 interface Stamped {
@@ -45,7 +45,7 @@ export interface StockUnitRow extends Stamped {
 	modelType: 'loudspeaker' | 'amplifier';
 	modelId: number;
 	modelName: string;
-	status: UnitStatus;
+	status: StockUnitStatus;
 	location: string;
 	lastTestedAt: string | null;
 	notes: string;

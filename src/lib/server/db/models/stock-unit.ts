@@ -8,7 +8,7 @@ import {
 	type NonAttribute,
 	type Sequelize
 } from 'sequelize';
-import { UNIT_STATUSES, type UnitStatus } from '../../../schemas/inventory-units';
+import { STOCK_UNIT_STATUSES, type StockUnitStatus } from '../../../schemas/inventory-units';
 import type { AmplifierModel } from './amplifier-model';
 import type { LoudspeakerModel } from './loudspeaker-model';
 
@@ -19,7 +19,7 @@ export class StockUnit extends Model<InferAttributes<StockUnit>, InferCreationAt
 	declare modelType: 'loudspeaker' | 'amplifier';
 	declare loudspeakerModelId: ForeignKey<LoudspeakerModel['id']> | null;
 	declare amplifierModelId: ForeignKey<AmplifierModel['id']> | null;
-	declare status: UnitStatus;
+	declare status: StockUnitStatus;
 	declare location: string;
 	/** A calendar date (yyyy-mm-dd). */
 	declare lastTestedAt: string | null;
@@ -37,7 +37,7 @@ export class StockUnit extends Model<InferAttributes<StockUnit>, InferCreationAt
 				modelType: { type: DataTypes.ENUM('loudspeaker', 'amplifier'), allowNull: false },
 				loudspeakerModelId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
 				amplifierModelId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
-				status: { type: DataTypes.ENUM(...UNIT_STATUSES), allowNull: false },
+				status: { type: DataTypes.ENUM(...STOCK_UNIT_STATUSES), allowNull: false },
 				location: { type: DataTypes.STRING(120), allowNull: false },
 				lastTestedAt: { type: DataTypes.DATEONLY, allowNull: true },
 				notes: { type: DataTypes.TEXT, allowNull: false },
