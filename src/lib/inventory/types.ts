@@ -53,7 +53,7 @@ export interface StockUnitRow extends Stamped {
 
 export type HistoryModelType = 'loudspeaker' | 'amplifier' | 'package' | 'unit';
 
-export interface SpecChangeRow {
+export interface HistoryEntryRow {
 	id: number;
 	field: string;
 	oldValue: string | null;
