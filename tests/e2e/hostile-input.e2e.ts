@@ -29,7 +29,7 @@ import {
 import { packagePatchSchema, packageSchema } from '../../src/lib/schemas/inventory-packages';
 import { stockUnitPatchSchema, stockUnitSchema } from '../../src/lib/schemas/inventory-units';
 import { repairSchema, scanSchema } from '../../src/lib/schemas/bookings';
-import { evaluationRequestSchema } from '../../src/lib/schemas/evaluation';
+import { quoteRequestSchema } from '../../src/lib/schemas/evaluation';
 import {
 	quoteActionSchema,
 	quoteCreateSchema,
@@ -73,8 +73,8 @@ type Target =
 const TARGETS: Record<string, Target> = {
 	'POST /api/users': { as: 'admin', body: 'json', schema: userCreateSchema },
 	'PATCH /api/users/[id=id]': { as: 'admin', body: 'json', schema: userUpdateSchema },
-	'POST /api/evaluations': { as: 'sales', body: 'json', schema: evaluationRequestSchema },
-	'POST /api/suggestions': { as: 'sales', body: 'json', schema: evaluationRequestSchema },
+	'POST /api/evaluations': { as: 'sales', body: 'json', schema: quoteRequestSchema },
+	'POST /api/suggestions': { as: 'sales', body: 'json', schema: quoteRequestSchema },
 	'POST /api/clients': { as: 'sales', body: 'json', schema: clientSchema },
 	'PATCH /api/clients/[id=id]': { as: 'sales', body: 'json', schema: clientUpdateSchema },
 	// Open to the signed-out: asking for a link is how they get back in.

@@ -19,7 +19,7 @@ const finite = (min: number, max: number, what: string) =>
  * ranges are those of the methods used (ISO 9613-1 air absorption holds for −20…50 °C and
  * 10…100 % relative humidity) and of outdoor live sound.
  */
-export const evaluationRequestSchema = z
+export const quoteRequestSchema = z
 	.object({
 		targetDb: finite(40, 140, 'the target level (dB)'),
 		weighting,
@@ -67,6 +67,6 @@ export const evaluationRequestSchema = z
 			ctx.addIssue({ code: 'custom', path: ['startDate'], message: 'The hire cannot start in the past' });
 		}
 	});
-export type QuoteRequestInput = z.infer<typeof evaluationRequestSchema>;
+export type QuoteRequestInput = z.infer<typeof quoteRequestSchema>;
 
 export { toMetres };
