@@ -252,7 +252,7 @@ const TABLE: Record<string, Row> = {
 	'action /quotes/[id=id]?/requestChange':     { out: S, admin: D, warehouse: D, sales: D, client: 409, stranger: 'missing', quote: 'cancelled' },
 	'action /quotes/[id=id]?/cancel':            { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' },
 	'action /quotes/[id=id]?/close':             { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' },
-	'action /quotes/[id=id]?/balance':           { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' }
+	'action /quotes/[id=id]?/balanceInvoice':    { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' }
 };
 
 /** Well-formed (so it reaches the lookup) but issued to nobody. */

@@ -6,7 +6,7 @@ import { requireCapability } from '$lib/server/auth/guards';
 import { DomainError, orHttpError } from '$lib/server/services/errors';
 import { applyQuoteAction, termsFor } from '$lib/server/services/quote-actions';
 import { hireStateForClient } from '$lib/server/services/booking-life';
-import { invoiceBalance } from '$lib/server/services/balance';
+import { createBalanceInvoice } from '$lib/server/services/balance-invoice';
 import { getQuote } from '$lib/server/services/quotes';
 import { getSettings } from '$lib/server/services/settings';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
@@ -48,11 +48,11 @@ export const actions: Actions = {
 	requestChange: act('request-change'),
 	cancel: act('cancel'),
 	close: act('close'),
-	balance: async (event) => {
+	balanceInvoice: async (event) => {
 		const user = requireCapability(event, 'invoices:issue');
 		try {
-			const outcome = await invoiceBalance(Number(event.params.id), user);
-			return { done: 'balance', mailSent: outcome.mailSent };
+			const outcome = await createBalanceInvoice(Number(event.params.id), user);
+			return { done: 'balance-invoice', mailSent: outcome.mailSent };
 		} catch (err) {
 			if (err instanceof DomainError) return fail(err.status, { actionError: err.message });
 			throw err;
