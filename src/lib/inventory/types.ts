@@ -42,7 +42,7 @@ export type LoadedPackage = Omit<PackageRow, 'groups'> & { groups: LoadedGroup[]
 
 export interface StockUnitRow extends Stamped {
 	serial: string;
-	modelType: 'loudspeaker' | 'amplifier';
+	modelType: ModelType;
 	modelId: number;
 	modelName: string;
 	status: StockUnitStatus;
@@ -51,7 +51,10 @@ export interface StockUnitRow extends Stamped {
 	notes: string;
 }
 
-export type HistoryModelType = 'loudspeaker' | 'amplifier' | 'package' | 'unit';
+/** Which kind of model a stock unit, booking line or attachment belongs to. */
+export type ModelType = 'loudspeaker' | 'amplifier';
+
+export type HistoryModelType = ModelType | 'package' | 'unit';
 
 export interface HistoryEntryRow {
 	id: number;
@@ -65,7 +68,7 @@ export interface HistoryEntryRow {
 
 export interface AttachmentRow {
 	id: number;
-	modelType: 'loudspeaker' | 'amplifier';
+	modelType: ModelType;
 	modelId: number;
 	kind: 'spec-sheet' | 'photo';
 	originalName: string;

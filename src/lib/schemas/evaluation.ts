@@ -1,10 +1,8 @@
 import { z } from 'zod';
 import { hireDays, parseIsoDate } from '../quotes/hire-days';
 import { MAX_HIRE_DAYS, localIsoDate } from '../quotes/hire-limits';
+import { toMetres } from '../acoustics/units';
 import { inlineSiteSchema } from './sites';
-
-const FT = 0.3048;
-const toMetres = (value: number, unit: 'm' | 'ft') => (unit === 'ft' ? value * FT : value);
 
 const weighting = z.enum(['A', 'C', 'Z'], { error: 'Choose A, C or Z weighting' });
 const isoDate = z.string().refine((v) => parseIsoDate(v) !== null, 'A date as YYYY-MM-DD');
@@ -69,4 +67,3 @@ export const quoteRequestSchema = z
 	});
 export type QuoteRequestInput = z.infer<typeof quoteRequestSchema>;
 
-export { toMetres };

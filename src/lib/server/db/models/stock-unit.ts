@@ -11,12 +11,13 @@ import {
 import { STOCK_UNIT_STATUSES, type StockUnitStatus } from '../../../schemas/inventory-units';
 import type { AmplifierModel } from './amplifier-model';
 import type { LoudspeakerModel } from './loudspeaker-model';
+import type { ModelType } from '../../../inventory/types';
 
 /** One physical cabinet or amplifier with its serial; exactly one of the two model ids is set. */
 export class StockUnit extends Model<InferAttributes<StockUnit>, InferCreationAttributes<StockUnit>> {
 	declare id: CreationOptional<number>;
 	declare serial: string;
-	declare modelType: 'loudspeaker' | 'amplifier';
+	declare modelType: ModelType;
 	declare loudspeakerModelId: ForeignKey<LoudspeakerModel['id']> | null;
 	declare amplifierModelId: ForeignKey<AmplifierModel['id']> | null;
 	declare status: StockUnitStatus;
