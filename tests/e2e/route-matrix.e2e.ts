@@ -271,6 +271,7 @@ function idFor(collection: string, row: Row): number {
 		amplifiers: ids.ampId,
 		packages: ids.packageId,
 		units: ids.unitId,
+		'stock-units': ids.unitId,
 		attachments: ids.attachmentId,
 		bookings: ids.bookingId,
 		'damage-reports': ids.unitId,
