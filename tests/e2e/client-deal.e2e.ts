@@ -104,7 +104,7 @@ describe('the client answers the quote', () => {
 		const mail = await waitForMail({ to: email, subjectIncludes: 'Quote' });
 		const page = await browser.newPage();
 		await openLink(page, linkIn(mail.text));
-		await page.getByRole('button', { name: 'Decline', exact: true }).click();
+		await page.getByText('Decline', { exact: true }).click();
 		await page.getByLabel(/Anything we should know/).fill('We found a smaller venue.');
 		const since = new Date();
 		await page.getByRole('button', { name: 'Decline the quote' }).click();
