@@ -5,9 +5,16 @@ import type { QuoteRequestInput } from '../schemas/evaluation';
 import type { SiteSnapshot } from '../schemas/sites';
 import { limitLabel } from '../sites/model-site';
 import { outcomeOf } from './outcome';
+import { metresToFeet } from '../acoustics/units';
 
 export function distanceText(value: number, unit: 'm' | 'ft'): string {
 	return `${Number(value.toFixed(1))} ${unit}`;
+}
+
+/** The width a package covers at the position, in the unit the request was made in ("39 ft wide"). */
+export function coverageText(widthM: number, unit: 'm' | 'ft'): string {
+	if (!Number.isFinite(widthM)) return 'all round';
+	return `${(unit === 'ft' ? metresToFeet(widthM) : widthM).toFixed(0)} ${unit} wide`;
 }
 
 export function levelPromise(request: QuoteRequestInput): string {
