@@ -137,7 +137,7 @@ describe('bad input gets a calm answer and changes nothing', () => {
 		const cookie = await clientSessionFor(email);
 		const refused = await api(`/api/quotes/${id}/actions`, { cookie, method: 'POST', body: { action: 'accept', acceptTerms: true } });
 		expect(refused.status).toBe(409);
-		expect(refused.json.message).toContain('valid until 2020-01-31');
+		expect(refused.json.message).toContain('valid until 31 Jan 2020');
 		const after = await api(`/api/quotes/${id}`, { cookie: await sessionCookie(ADMIN) });
 		expect(after.json.status).toBe('sent');
 		expect(after.json.invoices).toEqual([]);

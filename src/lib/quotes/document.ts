@@ -6,6 +6,7 @@ import type { PackageResult } from './evaluate-packages';
 import { OUTCOME_WORDS, outcomeOf } from './outcome';
 import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines } from './plain-language';
 import { formatMoney } from './pricing';
+import { formatDate, formatDateRange } from '../format/dates';
 import type { QuoteRequestInput } from '../schemas/evaluation';
 
 export interface Letterhead {
@@ -67,10 +68,10 @@ export function quoteDocument(source: DocumentSource, letterhead: Letterhead, te
 		title: `Quote ${source.reference}`,
 		facts: [
 			{ label: 'Quote', value: `${source.reference}, version ${source.version}` },
-			{ label: 'Issued', value: source.issueDate },
-			{ label: 'Valid until', value: source.validUntil ?? 'set when the quote is sent' },
+			{ label: 'Issued', value: formatDate(source.issueDate) },
+			{ label: 'Valid until', value: source.validUntil ? formatDate(source.validUntil) : 'set when the quote is sent' },
 			{ label: 'Event', value: source.eventName },
-			{ label: 'Hire', value: `${source.startDate} to ${source.endDate} (${p.hireDays} day${p.hireDays === 1 ? '' : 's'})` },
+			{ label: 'Hire', value: `${formatDateRange(source.startDate, source.endDate)} (${p.hireDays} day${p.hireDays === 1 ? '' : 's'})` },
 			...(siteName ? [{ label: 'Site', value: [siteName, source.site?.address?.trim()].filter(Boolean).join(', ') }] : [])
 		],
 		clientLines: [

@@ -1,4 +1,5 @@
 import { formatMoney } from '$lib/quotes/pricing';
+import { formatDateRange } from '$lib/format/dates';
 import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines, siteSentence } from '$lib/quotes/plain-language';
 import { OUTCOME_WORDS } from '$lib/quotes/outcome';
 import type { QuoteDetail } from '../services/quotes';
@@ -17,7 +18,7 @@ export function quoteSentEmail(quote: QuoteDetail, to: string, companyName: stri
 	const limits = limitsSentence(quote.result, quote.request);
 	const receivers = receiverLines(quote.result);
 	const paragraphs = [
-		`Here is our quote ${quote.reference} for ${quote.eventName}, ${quote.startDate} to ${quote.endDate}.`,
+		`Here is our quote ${quote.reference} for ${quote.eventName}, ${formatDateRange(quote.startDate, quote.endDate)}.`,
 		`We propose "${quote.packageName}" to give ${levelPromise(quote.request)}. ${headroomSentence(quote.result)}`,
 		`Assessment: ${OUTCOME_WORDS[quote.outcome]}.`,
 		...(boundary ? [boundary] : []),
