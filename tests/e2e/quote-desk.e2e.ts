@@ -87,6 +87,43 @@ describe('the desk flow, end to end', () => {
 	});
 });
 
+describe('the quote list and a request in feet, as the desk reads them', () => {
+	it('shows coverage in feet when the request is in feet', async () => {
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, 'sales@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/quotes/new`);
+		await page.getByLabel('Unit', { exact: true }).selectOption('ft');
+		await page.getByLabel('Hire from').fill('2032-07-10');
+		await page.getByLabel('Hire until').fill('2032-07-10');
+		await page.getByLabel(/Level at the position/).fill('90');
+		await page.getByLabel(/Distance from the system to the position/).fill('80');
+		await page.getByLabel(/Audience width at that distance/).fill('100');
+		await page.getByText(/packages checked/).waitFor();
+		const coverage = await page.locator('dt', { hasText: 'Coverage' }).locator('xpath=following-sibling::dd').allTextContents();
+		expect(coverage.length).toBeGreaterThan(0);
+		for (const text of coverage) expect(text).not.toMatch(/\d m wide/);
+		expect(coverage.join(' ')).toMatch(/\d+ ft wide|all round/);
+		await page.close();
+	});
+
+	it('lists quotes in the order its heading states: the last changed first', async () => {
+		const cookie = await sessionCookie('sales@kestrel-yard.test');
+		const listed = (await api('/api/quotes', { cookie })).json as { reference: string; updatedAt: string }[];
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, 'sales@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/quotes`);
+		await page.getByText('Every quote, the last changed first.').waitFor();
+		const shown = await page.locator('tbody tr td:first-child a').allTextContents();
+		const changed = new Map(listed.map((q) => [q.reference, q.updatedAt]));
+		const times = shown.map((ref) => changed.get(ref.trim())!);
+		expect(times.every(Boolean)).toBe(true);
+		expect(times).toEqual([...times].sort().reverse());
+		await page.close();
+	});
+});
+
 describe('a new organiser without an account', () => {
 	it('gets a one-time sign-in link with the quote that opens it, once', async () => {
 		const email = `new-organiser-${Date.now()}@example.test`;
