@@ -19,5 +19,6 @@ describe('one date format', () => {
 
 	it('leaves something that is not a date as it was', () => {
 		expect(formatDate('soon')).toBe('soon');
+		expect(formatDate(null)).toBe('—');
 	});
 });

@@ -10,8 +10,9 @@ function parse(value: string | Date): Date | null {
 	return Number.isNaN(date.getTime()) ? null : date;
 }
 
-/** "12 Jun 2027"; a date-only string is read as that calendar day; anything unreadable is returned as given. */
-export function formatDate(value: string | Date): string {
+/** "12 Jun 2027"; a date-only string is read as that calendar day; none is "—"; anything unreadable is returned as given. */
+export function formatDate(value: string | Date | null | undefined): string {
+	if (value == null) return '—';
 	const d = parse(value);
 	if (!d) return String(value);
 	return `${d.getUTCDate()} ${MONTHS[d.getUTCMonth()]} ${d.getUTCFullYear()}`;
