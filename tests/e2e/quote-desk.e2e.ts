@@ -124,6 +124,36 @@ describe('the quote list and a request in feet, as the desk reads them', () => {
 	});
 });
 
+describe('cancelling a quote', () => {
+	it('asks for confirmation with the consequences in words, and a form post without it changes nothing', async () => {
+		const sales = await sessionCookie('sales@kestrel-yard.test');
+		const request = { targetDb: 80, weighting: 'A', distance: 10, distanceUnit: 'm', programme: 'speech', startDate: '2032-09-12', endDate: '2032-09-12' };
+		const ranked = await api('/api/evaluations', { cookie: sales, method: 'POST', body: request });
+		const clients = await api('/api/clients', { cookie: sales });
+		const created = await api('/api/quotes', { cookie: sales, method: 'POST', body: { clientId: clients.json[0].id, eventName: 'Cancel confirmation check', packageId: ranked.json.results[0].packageId, request } });
+		expect(created.status).toBe(201);
+		const url = `${BASE_URL}/quotes/${created.json.id}`;
+
+		// Without JavaScript's help (a plain form post, no ticked box) the server refuses and nothing moves.
+		const bare = await fetch(`${url}?/cancel`, { method: 'POST', redirect: 'manual', headers: { cookie: sales, origin: BASE_URL, 'content-type': 'application/x-www-form-urlencoded' }, body: '' });
+		expect(bare.status).toBe(400);
+		expect((await api(`/api/quotes/${created.json.id}`, { cookie: sales })).json.status).toBe('draft');
+
+		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+		await signIn(page, 'sales@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(url);
+		await page.getByText('Cancel quote…').click();
+		const consequences = await page.getByTestId('cancel-consequences').textContent();
+		expect(consequences).toContain('cancelled for good');
+		expect(consequences).toContain('The client is told by e-mail.');
+		await page.getByLabel('Yes, cancel this quote').check();
+		await page.getByRole('button', { name: 'Cancel the quote' }).click();
+		await expect.poll(() => page.getByTestId('quote-status').textContent()).toBe('Cancelled');
+		await page.close();
+	});
+});
+
 describe('a new organiser without an account', () => {
 	it('gets a one-time sign-in link with the quote that opens it, once', async () => {
 		const email = `new-organiser-${Date.now()}@example.test`;
