@@ -67,10 +67,21 @@ describe('the desk flow, end to end', () => {
 		await page.getByRole('heading', { name: 'Riverside main stage, browser test' }).waitFor();
 		await page.getByText('In short').waitFor();
 		await page.getByRole('complementary', { name: 'Assumptions and cautions' }).waitFor();
+		// The client reads the short cautions and what the outcomes mean, not the modelling footnotes.
+		const cautions = await page.getByRole('complementary', { name: 'Assumptions and cautions' }).textContent();
+		expect(cautions).toMatch(/Clear means .*Tight means .*Short means .*Over the limit means/);
+		expect(cautions).toContain('Hearing safety');
+		expect(cautions).not.toContain('transition distance');
 		await expect(page.getByRole('button', { name: 'Accept this quote' }).isVisible()).resolves.toBe(true);
 		const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
 		expect(overflow).toBeLessThanOrEqual(0);
 		await screenshot(page, 'quote-client-390');
+		const print = await page.context().newPage();
+		await print.goto(`${quoteUrl}/print`);
+		const printed = await print.locator('main').textContent();
+		expect(printed).toContain('Hearing safety: sound at these levels can damage hearing.');
+		expect(printed).toMatch(/Assessment: \w.*Clear means/);
+		await print.close();
 		await page.close();
 	});
 

@@ -3,10 +3,10 @@
  * by the server as a PDF and by the print view as a page, so both say the same thing.
  */
 import type { PackageResult } from './evaluate-packages';
-import { OUTCOME_WORDS, outcomeOf } from './outcome';
-import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines } from './plain-language';
+import { outcomeOf } from './outcome';
+import { assessmentText, boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines } from './plain-language';
 import { formatMoney } from './pricing';
-import { formatDate, formatDateRange } from '../format/dates';
+import { formatDate, formatDateRange, formatDateTime } from '../format/dates';
 import type { QuoteRequestInput } from '../schemas/evaluation';
 
 export interface Letterhead {
@@ -83,7 +83,7 @@ export function quoteDocument(source: DocumentSource, letterhead: Letterhead, te
 		promise: [
 			`${result.packageName} to give ${levelPromise(request)}.`,
 			headroomSentence(result),
-			`Assessment: ${OUTCOME_WORDS[outcomeOf(result)]}.`,
+			assessmentText(outcomeOf(result)),
 			...(boundary ? [boundary] : []),
 			...(limits ? [limits] : []),
 			...receiverLines(result)
@@ -99,6 +99,6 @@ export function quoteDocument(source: DocumentSource, letterhead: Letterhead, te
 		terms,
 		cautions: [...CLIENT_CAUTIONS, ...cautions],
 		notes: source.notes,
-		acceptance: source.acceptance ? `Accepted with these terms by ${source.acceptance.byName} on ${source.acceptance.at.slice(0, 16).replace('T', ' ')} UTC.` : null
+		acceptance: source.acceptance ? `Accepted with these terms by ${source.acceptance.byName} on ${formatDateTime(source.acceptance.at)}.` : null
 	};
 }

@@ -1,7 +1,6 @@
 import { formatMoney } from '$lib/quotes/pricing';
 import { formatDateRange } from '$lib/format/dates';
-import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines, siteSentence } from '$lib/quotes/plain-language';
-import { OUTCOME_WORDS } from '$lib/quotes/outcome';
+import { assessmentText, boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines, siteSentence } from '$lib/quotes/plain-language';
 import type { QuoteDetail } from '../services/quotes';
 import type { EmailMessage } from './outbox';
 import { publicOrigin } from './transport';
@@ -20,7 +19,7 @@ export function quoteSentEmail(quote: QuoteDetail, to: string, companyName: stri
 	const paragraphs = [
 		`Here is our quote ${quote.reference} for ${quote.eventName}, ${formatDateRange(quote.startDate, quote.endDate)}.`,
 		`We propose "${quote.packageName}" to give ${levelPromise(quote.request)}. ${headroomSentence(quote.result)}`,
-		`Assessment: ${OUTCOME_WORDS[quote.outcome]}.`,
+		assessmentText(quote.outcome),
 		...(boundary ? [boundary] : []),
 		...(site ? [site] : []),
 		...(limits ? [limits] : []),
