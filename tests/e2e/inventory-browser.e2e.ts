@@ -46,6 +46,23 @@ describe('inventory in the browser', () => {
 		await page.close();
 	});
 
+	it('shows day rates and their changes as money with the currency, never minor units', async () => {
+		const cookie = await sessionCookie('warehouse@kestrel-yard.test');
+		const changed = await api(`/api/loudspeakers/${modelId}`, { cookie, method: 'PATCH', body: { dayRateMinor: 3250 } });
+		expect(changed.status).toBe(200);
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, 'warehouse@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/inventory/loudspeakers/${modelId}`);
+		const row = page.getByTestId('spec-history').getByRole('row').filter({ hasText: 'Day rate' });
+		await expect(row.textContent()).resolves.toMatch(/£20\.00\s*→\s*£32\.50/);
+		await expect(row.textContent()).resolves.not.toMatch(/minor units|\b2000\b/);
+		await page.goto(`${BASE_URL}/inventory/loudspeakers`);
+		const listed = await page.getByRole('row').filter({ hasText: changed.json.name }).textContent();
+		expect(listed).toContain('£32.50');
+		await page.close();
+	});
+
 	it('a warehouse user edits one directivity cell with the keyboard and sees it in the spec history', async () => {
 		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
 		await signIn(page, 'warehouse@kestrel-yard.test');
