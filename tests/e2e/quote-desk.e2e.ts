@@ -76,12 +76,10 @@ describe('the desk flow, end to end', () => {
 		const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
 		expect(overflow).toBeLessThanOrEqual(0);
 		await screenshot(page, 'quote-client-390');
-		const print = await page.context().newPage();
-		await print.goto(`${quoteUrl}/print`);
-		const printed = await print.locator('main').textContent();
+		await page.goto(`${quoteUrl}/print`);
+		const printed = await page.locator('main').textContent();
 		expect(printed).toContain('Hearing safety: sound at these levels can damage hearing.');
 		expect(printed).toMatch(/Assessment: \w.*Clear means/);
-		await print.close();
 		await page.close();
 	});
 
@@ -146,8 +144,9 @@ describe('cancelling a quote', () => {
 		const url = `${BASE_URL}/quotes/${created.json.id}`;
 
 		// Without JavaScript's help (a plain form post, no ticked box) the server refuses and nothing moves.
-		const bare = await fetch(`${url}?/cancel`, { method: 'POST', redirect: 'manual', headers: { cookie: sales, origin: BASE_URL, 'content-type': 'application/x-www-form-urlencoded' }, body: '' });
+		const bare = await fetch(`${url}?/cancel`, { method: 'POST', redirect: 'manual', headers: { cookie: sales, origin: BASE_URL, accept: 'text/html', 'content-type': 'application/x-www-form-urlencoded' }, body: '' });
 		expect(bare.status).toBe(400);
+		expect(await bare.text()).toContain('Tick “Yes, cancel this quote” to confirm. Nothing has changed.');
 		expect((await api(`/api/quotes/${created.json.id}`, { cookie: sales })).json.status).toBe('draft');
 
 		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
