@@ -12,6 +12,7 @@ import { useTestDatabase } from '../helpers/db';
 import { clientSessionFor, sentQuoteForNewClient, tag, SALES, ADMIN } from '../helpers/deal';
 import { BASE_URL } from './browser';
 import { api, sessionCookie } from './http';
+import { formatDate } from '../../src/lib/format/dates';
 
 useTestDatabase();
 let sales: string;
@@ -80,7 +81,7 @@ describe('the quote document', () => {
 		expect(text).toContain(formatMoney(price.totalMinor, price.currency));
 		expect(text).toContain(formatMoney(price.depositMinor, price.currency));
 		expect(quote.validUntil).toMatch(/^\d{4}-\d{2}-\d{2}$/);
-		expect(text).toContain(`Valid until: ${quote.validUntil}`);
+		expect(text).toContain(`Valid until: ${formatDate(quote.validUntil)}`); // the one date format, "1 Jan 2027"
 		expect(text).toMatch(/Cancellation: cancel at least \d+ days before the hire starts/);
 		for (const line of [...quote.result.billOfMaterials.loudspeakers, ...quote.result.billOfMaterials.amplifiers]) {
 			expect(text).toContain(`${line.count} × ${line.name}`);
