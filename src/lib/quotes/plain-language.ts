@@ -6,16 +6,16 @@ import type { SiteSnapshot } from '../schemas/sites';
 import { limitLabel } from '../sites/model-site';
 import { OUTCOME_WORDS, outcomeOf } from './outcome';
 import type { Outcome } from '../acoustics';
-import { metresToFeet } from '../acoustics/units';
+import { fromMetres, type DistanceUnit } from '../acoustics/units';
 
 export function distanceText(value: number, unit: 'm' | 'ft'): string {
 	return `${Number(value.toFixed(1))} ${unit}`;
 }
 
 /** The width a package covers at the position, in the unit the request was made in ("39 ft wide"). */
-export function coverageText(widthM: number, unit: 'm' | 'ft'): string {
+export function coverageText(widthM: number, unit: DistanceUnit): string {
 	if (!Number.isFinite(widthM)) return 'all round';
-	return `${(unit === 'ft' ? metresToFeet(widthM) : widthM).toFixed(0)} ${unit} wide`;
+	return `${fromMetres(widthM, unit).toFixed(0)} ${unit} wide`;
 }
 
 export function levelPromise(request: QuoteRequestInput): string {

@@ -6,8 +6,8 @@ import type { QuoteActionInput } from '$lib/schemas/quotes';
 import { requireCapability } from '$lib/server/auth/guards';
 import { DomainError, orHttpError } from '$lib/server/services/errors';
 import { applyQuoteAction, termsFor } from '$lib/server/services/quote-actions';
-import { hireStateForClient } from '$lib/server/services/booking-life';
-import { invoiceBalance } from '$lib/server/services/balance';
+import { bookingStateForClient } from '$lib/server/services/booking-life';
+import { createBalanceInvoice } from '$lib/server/services/balance-invoice';
 import { getQuote } from '$lib/server/services/quotes';
 import { getSettings } from '$lib/server/services/settings';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
@@ -20,12 +20,12 @@ export const load: PageServerLoad = async (event) => {
 	const [quote, settings] = await Promise.all([orHttpError(() => getQuote(Number(event.params.id), user)), getSettings()]);
 	const expired = quote.status === 'sent' && isExpired(quote.validUntil, today());
 	// getQuote already refused a client another organisation's quote, so the hire's state is theirs.
-	const hire = canAny(user.role, 'bookings:read', 'bookings:read-own') ? await hireStateForClient(quote.id) : null;
+	const booking = canAny(user.role, 'bookings:read', 'bookings:read-own') ? await bookingStateForClient(quote.id) : null;
 	const actions = allowedActions(quote.status);
 	const cancelNotice = actions.includes('cancel') && can(user.role, 'quotes:write')
 		? cancelConsequences({ status: quote.status, startDate: quote.startDate, today: today(), cancellationFullRefundDays: settings.cancellationFullRefundDays, invoices: quote.invoices })
 		: null;
-	return { quote, actions, terms: termsFor(quote, settings), expired, hire, cancelNotice };
+	return { quote, actions, terms: termsFor(quote, settings), expired, booking, cancelNotice };
 };
 
 /** The form's extra fields: the ticked terms box and the client's message. */
@@ -61,11 +61,11 @@ export const actions: Actions = {
 		return act('cancel')(event);
 	},
 	close: act('close'),
-	balance: async (event) => {
+	balanceInvoice: async (event) => {
 		const user = requireCapability(event, 'invoices:issue');
 		try {
-			const outcome = await invoiceBalance(Number(event.params.id), user);
-			return { done: 'balance', mailSent: outcome.mailSent };
+			const outcome = await createBalanceInvoice(Number(event.params.id), user);
+			return { done: 'balance-invoice', mailSent: outcome.mailSent };
 		} catch (err) {
 			if (err instanceof DomainError) return fail(err.status, { actionError: err.message });
 			throw err;
