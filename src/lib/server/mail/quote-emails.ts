@@ -1,7 +1,7 @@
 import { formatMoney } from '$lib/quotes/pricing';
 import { formatDateRange } from '$lib/format/dates';
 import { assessmentText, boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines, siteSentence } from '$lib/quotes/plain-language';
-import type { QuoteDetail } from '../services/quotes';
+import type { QuoteDetail } from '$lib/quotes/types';
 import type { EmailMessage } from './outbox';
 import { publicOrigin } from './transport';
 
