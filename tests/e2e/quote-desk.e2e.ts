@@ -87,17 +87,10 @@ describe('the desk flow, end to end', () => {
 
 describe('the quote list and a request in feet, as the desk reads them', () => {
 	it('shows coverage in feet when the request is in feet', async () => {
-		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-		await signIn(page, 'sales@kestrel-yard.test');
-		await page.waitForURL(`${BASE_URL}/`);
-		await page.goto(`${BASE_URL}/quotes/new`);
+		const page = await openDeskRequest(browser, { event: 'Coverage in feet', from: '2032-07-10', until: '2032-07-10', levelDb: 90, distanceM: 25 });
 		await page.getByLabel('Unit', { exact: true }).selectOption('ft');
-		await page.getByLabel('Hire from').fill('2032-07-10');
-		await page.getByLabel('Hire until').fill('2032-07-10');
-		await page.getByLabel(/Level at the position/).fill('90');
-		await page.getByLabel(/Distance from the system to the position/).fill('80');
 		await page.getByLabel(/Audience width at that distance/).fill('100');
-		await page.getByText(/packages checked/).waitFor();
+		await page.getByText(/\d+ ft wide/).first().waitFor(); // the results after the switch to feet
 		const coverage = await page.locator('dt', { hasText: 'Coverage' }).locator('xpath=following-sibling::dd').allTextContents();
 		expect(coverage.length).toBeGreaterThan(0);
 		for (const text of coverage) expect(text).not.toMatch(/\d m wide/);
