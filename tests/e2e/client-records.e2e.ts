@@ -12,6 +12,7 @@ import { useTestDatabase } from '../helpers/db';
 import { clientSessionFor, sentQuoteForNewClient, tag, SALES, ADMIN } from '../helpers/deal';
 import { BASE_URL } from './browser';
 import { api, sessionCookie } from './http';
+import { formatDate } from '../../src/lib/format/dates';
 
 useTestDatabase();
 let sales: string;
@@ -80,7 +81,7 @@ describe('the quote document', () => {
 		expect(text).toContain(formatMoney(price.totalMinor, price.currency));
 		expect(text).toContain(formatMoney(price.depositMinor, price.currency));
 		expect(quote.validUntil).toMatch(/^\d{4}-\d{2}-\d{2}$/);
-		expect(text).toContain(`Valid until: ${quote.validUntil}`);
+		expect(text).toContain(`Valid until: ${formatDate(quote.validUntil)}`); // the one date format, "1 Jan 2027"
 		expect(text).toMatch(/Cancellation: cancel at least \d+ days before the hire starts/);
 		for (const line of [...quote.result.billOfMaterials.loudspeakers, ...quote.result.billOfMaterials.amplifiers]) {
 			expect(text).toContain(`${line.count} × ${line.name}`);
@@ -137,7 +138,7 @@ describe('bad input gets a calm answer and changes nothing', () => {
 		const cookie = await clientSessionFor(email);
 		const refused = await api(`/api/quotes/${id}/actions`, { cookie, method: 'POST', body: { action: 'accept', acceptTerms: true } });
 		expect(refused.status).toBe(409);
-		expect(refused.json.message).toContain('valid until 2020-01-31');
+		expect(refused.json.message).toContain('valid until 31 Jan 2020');
 		const after = await api(`/api/quotes/${id}`, { cookie: await sessionCookie(ADMIN) });
 		expect(after.json.status).toBe('sent');
 		expect(after.json.invoices).toEqual([]);

@@ -2,6 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { BASE_URL } from './browser';
 import { api, sessionCookie } from './http';
 import { amplifierBody, loudspeakerBody, makeFixtures, tag } from './inventory-helpers';
+import { AMPLIFIER_CSV_COLUMNS } from '../../src/lib/inventory/csv';
 
 const cookies: Record<string, string> = {};
 beforeAll(async () => {
@@ -82,7 +83,8 @@ describe('CSV over HTTP', () => {
 			expect(response.headers.get('content-type')).toMatch(/^text\/csv/);
 			expect(response.headers.get('content-disposition')).toMatch(/^attachment; filename="/);
 			const exported = await response.text();
-			expect(exported.split('\r\n')[0].split(',')).toContain('name');
+			expect(exported.split('\r\n')[0].split(',')).toEqual(expect.arrayContaining(['Name', 'Weight (kg)', 'Day rate (GBP)']));
+			expect(exported.split('\r\n')[0]).not.toMatch(/dayRateMinor/);
 			const imported = await send(`/api/${list}/import`, exported, 'text/csv');
 			expect(imported.status).toBe(200);
 			expect(imported.json.created + imported.json.updated).toBe(0);
@@ -96,21 +98,32 @@ describe('CSV over HTTP', () => {
 		const exported = await (await fetch(`${BASE_URL}/api/amplifiers.csv`, { headers: { cookie: cookies.warehouse } })).text();
 		const header = exported.split('\r\n')[0];
 		const name = `Csv amp ${tag()}`;
-		const good = `${name},CSV Maker,2,700,1200,,4,1,9,1800,90000,2.5,`;
-		const bad = `Other ${tag()},CSV Maker,0,700,1200,,4,1,9,1800,90000,2.5,`;
+		const good = `${name},CSV Maker,2,700,1200,,4,1,9,18.00,900.00,2.5,`;
+		const bad = `Other ${tag()},CSV Maker,0,700,1200,,4,1,9,18.00,900.00,2.5,`;
 		const form = (text: string) => {
 			const data = new FormData();
 			data.set('file', new Blob([text], { type: 'text/csv' }), 'amps.csv');
 			return data;
 		};
 		const preview = await send('/api/amplifiers/import?preview=1', form(`${header}\r\n${good}\r\n${bad}\r\n`), null);
-		expect(preview.json.rows.map((r: { action: string }) => r.action)).toEqual(['create', 'invalid']);
+		// Rows by the spreadsheet's own numbers: the header is row 1.
+		expect(preview.json.rows.map((r: { row: number; action: string }) => [r.row, r.action])).toEqual([[2, 'create'], [3, 'invalid']]);
 		const refused = await send('/api/amplifiers/import', form(`${header}\r\n${good}\r\n${bad}\r\n`), null);
-		expect(refused).toMatchObject({ status: 422, json: { errors: { '2.channels': expect.any(Array) } } });
+		expect(refused).toMatchObject({ status: 422, json: { errors: { '3.channels': expect.any(Array) } } });
 		const list = await api('/api/amplifiers', { cookie: cookies.warehouse });
 		expect(list.json.some((a: { name: string }) => a.name === name)).toBe(false);
 		const applied = await send('/api/amplifiers/import', form(`${header}\r\n${good}\r\n`), null);
 		expect(applied).toMatchObject({ status: 200, json: { created: 1, updated: 0 } });
+		const made = (await api('/api/amplifiers', { cookie: cookies.warehouse })).json.find((a: { name: string }) => a.name === name);
+		expect(made).toMatchObject({ dayRateMinor: 1800, replacementValueMinor: 90000 });
+	});
+
+	it('still imports a file with the old field-name headers (money in minor units), and previews old → new', async () => {
+		const name = `Old csv amp ${tag()}`;
+		const old = (dayRate: number) => `${AMPLIFIER_CSV_COLUMNS.join(',')}\r\n${name},CSV Maker,2,700,1200,,4,1,9,${dayRate},90000,2.5,\r\n`;
+		expect(await send('/api/amplifiers/import', old(1800), 'text/csv')).toMatchObject({ status: 200, json: { created: 1 } });
+		const preview = await send('/api/amplifiers/import?preview=1', old(2150), 'text/csv');
+		expect(preview.json.rows).toEqual([expect.objectContaining({ row: 2, action: 'update', changes: [{ field: 'dayRateMinor', from: '1800', to: '2150' }] })]);
 	});
 
 	it('refuses a body over 1 MB and a body that is not CSV', async () => {

@@ -2,7 +2,8 @@ import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
 import { api, sessionCookie } from './http';
-import { loudspeakerBody } from './inventory-helpers';
+import { amplifierBody, loudspeakerBody } from './inventory-helpers';
+import { AMPLIFIER_CSV_COLUMNS } from '../../src/lib/inventory/csv';
 
 let browser: Browser;
 let modelId: number;
@@ -46,6 +47,23 @@ describe('inventory in the browser', () => {
 		await page.close();
 	});
 
+	it('shows day rates and their changes as money with the currency, never minor units', async () => {
+		const cookie = await sessionCookie('warehouse@kestrel-yard.test');
+		const changed = await api(`/api/loudspeakers/${modelId}`, { cookie, method: 'PATCH', body: { dayRateMinor: 3250 } });
+		expect(changed.status).toBe(200);
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, 'warehouse@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/inventory/loudspeakers/${modelId}`);
+		const row = page.getByTestId('spec-history').getByRole('row').filter({ hasText: 'Day rate' });
+		await expect(row.textContent()).resolves.toMatch(/£20\.00\s*→\s*£32\.50/);
+		await expect(row.textContent()).resolves.not.toMatch(/minor units|\b2000\b/);
+		await page.goto(`${BASE_URL}/inventory/loudspeakers`);
+		const listed = await page.getByRole('row').filter({ hasText: changed.json.name }).textContent();
+		expect(listed).toContain('£32.50');
+		await page.close();
+	});
+
 	it('a warehouse user edits one directivity cell with the keyboard and sees it in the spec history', async () => {
 		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
 		await signIn(page, 'warehouse@kestrel-yard.test');
@@ -79,6 +97,26 @@ describe('inventory in the browser', () => {
 		expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBe(0);
 		await page.getByText('Scroll sideways for more angles →').scrollIntoViewIfNeeded();
 		await screenshot(page, 'inventory-directivity-grid-390');
+		await page.close();
+	});
+
+	it('the CSV import preview shows old → new as money, by the spreadsheet’s row numbers, for a file with the old headers', async () => {
+		const cookie = await sessionCookie('warehouse@kestrel-yard.test');
+		const amp = (await api('/api/amplifiers', { cookie, method: 'POST', body: amplifierBody() })).json;
+		const row = (dayRate: number) => `${amp.name},${amp.maker},2,800,1400,,4,2,10,${dayRate},120000,3,`;
+		const csv = `${AMPLIFIER_CSV_COLUMNS.join(',')}\r\n${row(3100)}\r\n`;
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, 'warehouse@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/inventory/import`);
+		await page.getByLabel('Which models').selectOption('amplifiers');
+		await page.getByLabel(/CSV file/).setInputFiles({ name: 'amps.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+		await page.getByRole('button', { name: 'Check the file' }).click();
+		const preview = page.getByTestId('import-preview');
+		await preview.waitFor();
+		const line = preview.getByRole('row').filter({ hasText: amp.name });
+		expect(await line.locator('td').first().textContent()).toMatch(/^2/); // the header is row 1
+		expect(await line.getByTestId('import-changes').textContent()).toMatch(/Day rate:\s*£25\.00\s*→\s*£31\.00/);
 		await page.close();
 	});
 

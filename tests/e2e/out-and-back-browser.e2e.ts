@@ -110,6 +110,16 @@ describe('the new pages: axe clean, no sideways scroll at 390 px', () => {
 		await page.context().close();
 	}, 180_000);
 
+	it('the desk reads each hire’s state in words on the client’s record, never its code', async () => {
+		const quote = (await api(`/api/quotes/${own.quoteId}`, { cookie: sessions.sales })).json;
+		const page = await phonePage(EMAILS.sales);
+		await page.goto(`${BASE_URL}/clients/${quote.clientId}`);
+		const text = (await page.locator('body').textContent()) ?? '';
+		expect(text).toMatch(/· (Confirmed|Out|Back|Closed|Cancelled)\b/);
+		expect(text).not.toMatch(/· (confirmed|out|back|closed|cancelled)\b/);
+		await page.context().close();
+	});
+
 	it('the client reads the state of their hire in plain words on their quote', async () => {
 		const page = await phonePage(EMAILS.client);
 		await page.goto(`${BASE_URL}/quotes/${own.quoteId}`);

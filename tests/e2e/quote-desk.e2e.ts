@@ -56,10 +56,19 @@ describe('the desk flow, end to end', () => {
 		await page.getByRole('heading', { name: 'Riverside main stage, browser test' }).waitFor();
 		await page.getByText('In short').waitFor();
 		await page.getByRole('complementary', { name: 'Assumptions and cautions' }).waitFor();
+		// The client reads the short cautions and what the outcomes mean, not the modelling footnotes.
+		const cautions = await page.getByRole('complementary', { name: 'Assumptions and cautions' }).textContent();
+		expect(cautions).toMatch(/Clear means .*Tight means .*Short means .*Over the limit means/);
+		expect(cautions).toContain('Hearing safety');
+		expect(cautions).not.toContain('transition distance');
 		await expect(page.getByRole('button', { name: 'Accept this quote' }).isVisible()).resolves.toBe(true);
 		const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
 		expect(overflow).toBeLessThanOrEqual(0);
 		await screenshot(page, 'quote-client-390');
+		await page.goto(`${quoteUrl}/print`);
+		const printed = await page.locator('main').textContent();
+		expect(printed).toContain('Hearing safety: sound at these levels can damage hearing.');
+		expect(printed).toMatch(/Assessment: \w.*Clear means/);
 		await page.close();
 	});
 
@@ -72,6 +81,67 @@ describe('the desk flow, end to end', () => {
 		await page.waitForURL(`${BASE_URL}/`);
 		const response = await page.goto(quoteUrl);
 		expect(response?.status()).toBe(404);
+		await page.close();
+	});
+});
+
+describe('the quote list and a request in feet, as the desk reads them', () => {
+	it('shows coverage in feet when the request is in feet', async () => {
+		const page = await openDeskRequest(browser, { event: 'Coverage in feet', from: '2032-07-10', until: '2032-07-10', levelDb: 90, distanceM: 25 });
+		await page.getByLabel('Unit', { exact: true }).selectOption('ft');
+		await page.getByLabel(/Audience width at that distance/).fill('100');
+		await page.getByText(/\d+ ft wide/).first().waitFor(); // the results after the switch to feet
+		const coverage = await page.locator('dt', { hasText: 'Coverage' }).locator('xpath=following-sibling::dd').allTextContents();
+		expect(coverage.length).toBeGreaterThan(0);
+		for (const text of coverage) expect(text).not.toMatch(/\d m wide/);
+		expect(coverage.join(' ')).toMatch(/\d+ ft wide|all round/);
+		await page.close();
+	});
+
+	it('lists quotes in the order its heading states: the last changed first', async () => {
+		const cookie = await sessionCookie('sales@kestrel-yard.test');
+		const listed = (await api('/api/quotes', { cookie })).json as { reference: string; updatedAt: string }[];
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, 'sales@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/quotes`);
+		await page.getByText('Every quote, the last changed first.').waitFor();
+		const shown = await page.locator('tbody tr td:first-child a').allTextContents();
+		const changed = new Map(listed.map((q) => [q.reference, q.updatedAt]));
+		const times = shown.map((ref) => changed.get(ref.trim())!);
+		expect(times.every(Boolean)).toBe(true);
+		expect(times).toEqual([...times].sort().reverse());
+		await page.close();
+	});
+});
+
+describe('cancelling a quote', () => {
+	it('asks for confirmation with the consequences in words, and a form post without it changes nothing', async () => {
+		const sales = await sessionCookie('sales@kestrel-yard.test');
+		const request = { targetDb: 80, weighting: 'A', distance: 10, distanceUnit: 'm', programme: 'speech', startDate: '2032-09-12', endDate: '2032-09-12' };
+		const ranked = await api('/api/evaluations', { cookie: sales, method: 'POST', body: request });
+		const clients = await api('/api/clients', { cookie: sales });
+		const created = await api('/api/quotes', { cookie: sales, method: 'POST', body: { clientId: clients.json[0].id, eventName: 'Cancel confirmation check', packageId: ranked.json.results[0].packageId, request } });
+		expect(created.status).toBe(201);
+		const url = `${BASE_URL}/quotes/${created.json.id}`;
+
+		// Without JavaScript's help (a plain form post, no ticked box) the server refuses and nothing moves.
+		const bare = await fetch(`${url}?/cancel`, { method: 'POST', redirect: 'manual', headers: { cookie: sales, origin: BASE_URL, accept: 'text/html', 'content-type': 'application/x-www-form-urlencoded' }, body: '' });
+		expect(bare.status).toBe(400);
+		expect(await bare.text()).toContain('Tick “Yes, cancel this quote” to confirm. Nothing has changed.');
+		expect((await api(`/api/quotes/${created.json.id}`, { cookie: sales })).json.status).toBe('draft');
+
+		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+		await signIn(page, 'sales@kestrel-yard.test');
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(url);
+		await page.getByText('Cancel quote…').click();
+		const consequences = await page.getByTestId('cancel-consequences').textContent();
+		expect(consequences).toContain('cancelled for good');
+		expect(consequences).toContain('The client is told by e-mail.');
+		await page.getByLabel('Yes, cancel this quote').check();
+		await page.getByRole('button', { name: 'Cancel the quote' }).click();
+		await expect.poll(() => page.getByTestId('quote-status').textContent()).toBe('Cancelled');
 		await page.close();
 	});
 });

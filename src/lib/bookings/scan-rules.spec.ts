@@ -25,7 +25,7 @@ describe('scan rules', () => {
 		expect(dispatchRefusal({ ...good, outOn: 'Q-00012' })).toMatch(/out on booking Q-00012/);
 		expect(dispatchRefusal({ ...good, reservedFor: 'Q-00013' })).toMatch(/reserved for booking Q-00013/);
 		expect(dispatchRefusal({ ...good, unit: { status: 'retired', modelName: 'Top' } })).toMatch(/retired/);
-		expect(dispatchRefusal({ ...good, test: 'overdue' })).toMatch(/overdue.*due 2027-01-01/);
+		expect(dispatchRefusal({ ...good, test: 'overdue' })).toMatch(/overdue.*due 1 Jan 2027/);
 		expect(dispatchRefusal({ ...good, line: { needed: 2, dispatched: 2 } })).toMatch(/All 2 Top/);
 		expect(dispatchRefusal({ ...good, bookingState: 'back' })).toMatch(/is back/);
 	});

@@ -5,6 +5,7 @@
 import type { StockUnitStatus } from '$lib/schemas/inventory-units';
 import { canDispatch, canReturn, type BookingState } from './states';
 import type { TestStatus } from './safety-tests';
+import { formatDate } from '../format/dates';
 
 export interface DispatchFacts {
 	bookingState: BookingState;
@@ -32,7 +33,7 @@ export function dispatchRefusal(f: DispatchFacts): string | null {
 	if (f.unit.status !== 'ready') return `${f.serial} is ${f.unit.status === 'in-repair' ? 'in repair' : 'retired'}, not ready to go out.`;
 	if (f.test === 'overdue')
 		return f.testDue
-			? `${f.serial} is overdue for its electrical safety test (due ${f.testDue}); it stays in until tested.`
+			? `${f.serial} is overdue for its electrical safety test (due ${formatDate(f.testDue)}); it stays in until tested.`
 			: `${f.serial} has no electrical safety test on record; it stays in until tested.`;
 	if (f.line.dispatched >= f.line.needed) return `All ${f.line.needed} ${f.unit.modelName} for this booking are already out.`;
 	return null;

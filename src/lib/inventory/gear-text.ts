@@ -1,5 +1,6 @@
 import { bandLabel, type BandResponse, type DirectivityTable } from '$lib/schemas/directivity';
 import { NOMINAL_BANDS } from '$lib/schemas/programmes';
+import { formatMoney } from '$lib/quotes/pricing';
 
 /**
  * Band response and directivity tables as people read them, for history entries and summaries:
@@ -20,8 +21,9 @@ export function directivityText(table: DirectivityTable | null | undefined): str
 	return [`at ${table.anglesDeg.join(' ')}°`, ...rows].join('; ');
 }
 
-/** A spec history value: the two JSON fields in words, anything else as stored. */
-export function historyValueText(field: string, stored: string | null): string | null {
+/** A spec history value: money with its currency, the two JSON fields in words, anything else as stored. */
+export function historyValueText(field: string, stored: string | null, currency: string): string | null {
+	if (stored !== null && field.endsWith('Minor') && /^-?\d+$/.test(stored)) return formatMoney(Number(stored), currency);
 	if (stored === null || (field !== 'directivity' && field !== 'bandResponseDb')) return stored;
 	try {
 		const value = JSON.parse(stored);

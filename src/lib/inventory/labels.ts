@@ -19,8 +19,8 @@ export const FIELD_LABELS: Record<string, { label: string; unit?: string }> = {
 	compressionDb: { label: 'Power compression', unit: 'dB' },
 	directivity: { label: 'Directivity (polar data)', unit: 'dB re on axis' },
 	weightKg: { label: 'Weight', unit: 'kg' },
-	dayRateMinor: { label: 'Day rate', unit: 'minor units' },
-	replacementValueMinor: { label: 'Replacement value', unit: 'minor units' },
+	dayRateMinor: { label: 'Day rate' },
+	replacementValueMinor: { label: 'Replacement value' },
 	notes: { label: 'Notes' },
 	channels: { label: 'Channels' },
 	powerW8: { label: 'Power per channel at 8 Ω', unit: 'W' },
@@ -59,9 +59,4 @@ export function fieldLabel(field: string): string {
 	const entry = FIELD_LABELS[field];
 	if (!entry) return field;
 	return entry.unit ? `${entry.label} (${entry.unit})` : entry.label;
-}
-
-/** Minor units shown as major with two decimals (the currency itself is a company setting). */
-export function formatMinor(minor: number): string {
-	return (minor / 100).toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
 }

@@ -3,9 +3,10 @@
  * by the server as a PDF and by the print view as a page, so both say the same thing.
  */
 import type { PackageResult } from './evaluate-packages';
-import { OUTCOME_WORDS, outcomeOf } from './outcome';
-import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines } from './plain-language';
+import { outcomeOf } from './outcome';
+import { assessmentText, boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines } from './plain-language';
 import { formatMoney } from './pricing';
+import { formatDate, formatDateRange, formatDateTime } from '../format/dates';
 import type { QuoteRequestInput } from '../schemas/evaluation';
 
 export interface Letterhead {
@@ -67,10 +68,10 @@ export function quoteDocument(source: DocumentSource, letterhead: Letterhead, te
 		title: `Quote ${source.reference}`,
 		facts: [
 			{ label: 'Quote', value: `${source.reference}, version ${source.version}` },
-			{ label: 'Issued', value: source.issueDate },
-			{ label: 'Valid until', value: source.validUntil ?? 'set when the quote is sent' },
+			{ label: 'Issued', value: formatDate(source.issueDate) },
+			{ label: 'Valid until', value: source.validUntil ? formatDate(source.validUntil) : 'set when the quote is sent' },
 			{ label: 'Event', value: source.eventName },
-			{ label: 'Hire', value: `${source.startDate} to ${source.endDate} (${p.hireDays} day${p.hireDays === 1 ? '' : 's'})` },
+			{ label: 'Hire', value: `${formatDateRange(source.startDate, source.endDate)} (${p.hireDays} day${p.hireDays === 1 ? '' : 's'})` },
 			...(siteName ? [{ label: 'Site', value: [siteName, source.site?.address?.trim()].filter(Boolean).join(', ') }] : [])
 		],
 		clientLines: [
@@ -82,7 +83,7 @@ export function quoteDocument(source: DocumentSource, letterhead: Letterhead, te
 		promise: [
 			`${result.packageName} to give ${levelPromise(request)}.`,
 			headroomSentence(result),
-			`Assessment: ${OUTCOME_WORDS[outcomeOf(result)]}.`,
+			assessmentText(outcomeOf(result)),
 			...(boundary ? [boundary] : []),
 			...(limits ? [limits] : []),
 			...receiverLines(result)
@@ -98,6 +99,6 @@ export function quoteDocument(source: DocumentSource, letterhead: Letterhead, te
 		terms,
 		cautions: [...CLIENT_CAUTIONS, ...cautions],
 		notes: source.notes,
-		acceptance: source.acceptance ? `Accepted with these terms by ${source.acceptance.byName} on ${source.acceptance.at.slice(0, 16).replace('T', ' ')} UTC.` : null
+		acceptance: source.acceptance ? `Accepted with these terms by ${source.acceptance.byName} on ${formatDateTime(source.acceptance.at)}.` : null
 	};
 }

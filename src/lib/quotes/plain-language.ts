@@ -4,10 +4,18 @@ import type { PackageResult } from './evaluate-packages';
 import type { QuoteRequestInput } from '../schemas/evaluation';
 import type { SiteSnapshot } from '../schemas/sites';
 import { limitLabel } from '../sites/model-site';
-import { outcomeOf } from './outcome';
+import { OUTCOME_WORDS, outcomeOf } from './outcome';
+import type { Outcome } from '../acoustics';
+import { fromMetres, type DistanceUnit } from '../acoustics/units';
 
 export function distanceText(value: number, unit: 'm' | 'ft'): string {
 	return `${Number(value.toFixed(1))} ${unit}`;
+}
+
+/** The width a package covers at the position, in the unit the request was made in ("39 ft wide"). */
+export function coverageText(widthM: number, unit: DistanceUnit): string {
+	if (!Number.isFinite(widthM)) return 'all round';
+	return `${fromMetres(widthM, unit).toFixed(0)} ${unit} wide`;
 }
 
 export function levelPromise(request: QuoteRequestInput): string {
@@ -75,5 +83,15 @@ export const CLIENT_CAUTIONS = [
 	'These figures are predictions over flat ground, with the wind assumed to blow towards the neighbours (ISO 9613-2). Levels on the day depend on the site and the weather; we measure on site.',
 	'A temperature inversion or a stronger wind can raise the level at a distant neighbour above the prediction and any allowance.',
 	'Barriers, buildings, reflections and delay towers are not modelled.',
-	'Local noise regulations, the licensing authority’s conditions and hearing-safety rules take precedence over any prediction.'
+	'Local noise regulations and the licensing authority’s conditions take precedence over any prediction.',
+	'Hearing safety: sound at these levels can damage hearing. Exposure limits for the audience and crew apply whatever the prediction; plan for them and offer hearing protection.'
 ];
+
+/** One sentence a client reads beside the assessment: what each outcome means for their event. */
+export const OUTCOME_MEANING =
+	'Clear means the system reaches the level you asked for with power in reserve; Tight means it reaches it with little to spare, so it will run close to its limits; Short means it cannot reliably reach that level; Over the limit means that at that level a neighbour or the site boundary would be louder than the licence allows, so the level has to come down.';
+
+/** The assessment line of the e-mail and the quote document: the outcome, then what it means. */
+export function assessmentText(outcome: Outcome): string {
+	return `Assessment: ${OUTCOME_WORDS[outcome]}. ${OUTCOME_MEANING}`;
+}

@@ -54,3 +54,10 @@ describe('limitLabel', () => {
 		expect(limitLabel({ limitDb: 70, weighting: 'Z', bandHz: 63 })).toBe('70 dB at 63 Hz');
 	});
 });
+
+describe('limits on screen carry their unit', () => {
+	it('a boundary limit reads "limit 65 dB(C)", a band limit "limit 70 dB at 63 Hz"', () => {
+		expect(`limit ${limitLabel({ limitDb: 65, weighting: 'C' })}`).toBe('limit 65 dB(C)');
+		expect(`limit ${limitLabel({ limitDb: 70, weighting: 'Z', bandHz: 63 })}`).toBe('limit 70 dB at 63 Hz');
+	});
+});

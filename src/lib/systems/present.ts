@@ -80,11 +80,11 @@ export function presentSystems(candidates: readonly Candidate[], ctx: Evaluation
 }
 
 /** What stands in the way, in words. */
-export function obstacleLines(o: Obstacles | null): string[] {
+export function obstacleLines(o: Obstacles | null, weighting: string): string[] {
 	if (!o) return [];
 	return [
 		...o.bandsShort.map((b) => `The ${b.hz} Hz band is short even with everything in stock (best headroom ${b.bestHeadroomDb.toFixed(1)} dB)`),
-		...(o.receiverOver ? [`Receiver ${o.receiverOver.name} would be over its limit at the level asked${o.receiverOver.maxTargetDb !== null ? `; its limit allows at most ${o.receiverOver.maxTargetDb.toFixed(1)} dB at the position` : ''}`] : []),
+		...(o.receiverOver ? [`Receiver ${o.receiverOver.name} would be over its limit at the level asked${o.receiverOver.maxTargetDb !== null ? `; its limit allows at most ${o.receiverOver.maxTargetDb.toFixed(1)} dB(${weighting}) at the position` : ''}`] : []),
 		...o.modelsRunOut.map((name) => `${name} runs out on these dates`)
 	];
 }

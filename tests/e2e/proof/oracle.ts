@@ -37,7 +37,7 @@ export function csvVerdict(
 	if (b.bytes.length > MAX_CSV_BYTES + 16 * 1024) return 413;
 	if (!type.startsWith('text/csv') && !type.startsWith('text/plain')) return 400;
 	if (new TextEncoder().encode(b.text).length > MAX_CSV_BYTES) return 413;
-	const parsed = parseModelsCsv(b.text, columns, schema);
+	const parsed = parseModelsCsv(b.text, columns, schema, 'GBP'); // the demo company's currency
 	return parsed.fileErrors.length || parsed.rows.some((r) => !r.data) ? 422 : 'valid';
 }
 

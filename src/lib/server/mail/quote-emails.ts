@@ -1,6 +1,6 @@
 import { formatMoney } from '$lib/quotes/pricing';
-import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines, siteSentence } from '$lib/quotes/plain-language';
-import { OUTCOME_WORDS } from '$lib/quotes/outcome';
+import { formatDateRange } from '$lib/format/dates';
+import { assessmentText, boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines, siteSentence } from '$lib/quotes/plain-language';
 import type { QuoteDetail } from '$lib/quotes/types';
 import type { EmailMessage } from './outbox';
 import { publicOrigin } from './transport';
@@ -17,9 +17,9 @@ export function quoteSentEmail(quote: QuoteDetail, to: string, companyName: stri
 	const limits = limitsSentence(quote.result, quote.request);
 	const receivers = receiverLines(quote.result);
 	const paragraphs = [
-		`Here is our quote ${quote.reference} for ${quote.eventName}, ${quote.startDate} to ${quote.endDate}.`,
+		`Here is our quote ${quote.reference} for ${quote.eventName}, ${formatDateRange(quote.startDate, quote.endDate)}.`,
 		`We propose "${quote.packageName}" to give ${levelPromise(quote.request)}. ${headroomSentence(quote.result)}`,
-		`Assessment: ${OUTCOME_WORDS[quote.outcome]}.`,
+		assessmentText(quote.outcome),
 		...(boundary ? [boundary] : []),
 		...(site ? [site] : []),
 		...(limits ? [limits] : []),

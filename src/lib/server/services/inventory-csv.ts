@@ -5,6 +5,7 @@ import { historyText } from './inventory-common';
 import { amplifierSchema } from '$lib/schemas/inventory-amplifiers';
 import { loudspeakerSchema } from '$lib/schemas/inventory-loudspeakers';
 import { DomainError } from './errors';
+import { getSettings } from './settings';
 import { amplifiers } from './inventory-amplifiers';
 import { withTransaction } from './inventory-common';
 import { loudspeakers } from './inventory-loudspeakers';
@@ -28,18 +29,28 @@ export type CsvKind = keyof typeof CSV_KINDS;
 
 export const MAX_CSV_BYTES = 1024 * 1024;
 
+const currencyNow = async () => (await getSettings()).currency;
+
 export async function exportModelsCsv(kind: CsvKind): Promise<string> {
 	const { service, columns } = CSV_KINDS[kind];
-	return serialiseCsv(await service.list(), columns);
+	return serialiseCsv(await service.list(), columns, await currencyNow());
+}
+
+/** One field an update would change, old → new, as spec history stores values (minor units, JSON). */
+export interface ImportChange {
+	field: string;
+	from: string | null;
+	to: string | null;
 }
 
 export interface ImportPreviewRow {
+	/** The spreadsheet's row number (the header is row 1). */
 	row: number;
 	name: string;
 	maker: string;
 	action: 'create' | 'update' | 'unchanged' | 'invalid';
 	/** Fields an update would change. */
-	changes: string[];
+	changes: ImportChange[];
 	errors: Record<string, string[]>;
 }
 
@@ -52,7 +63,7 @@ export interface ImportPreview {
 /** What importing the file would do, row by row, without writing anything. */
 export async function previewImport(kind: CsvKind, text: string): Promise<ImportPreview> {
 	const { service, columns, schema } = CSV_KINDS[kind];
-	const parsed = parseModelsCsv(text, columns, schema);
+	const parsed = parseModelsCsv(text, columns, schema, await currencyNow());
 	const rows = await Promise.all(
 		parsed.rows.map(async (r): Promise<ImportPreviewRow> => {
 			const base = { row: r.row, name: String(r.values.name ?? ''), maker: String(r.values.maker ?? ''), errors: r.errors };
@@ -60,7 +71,9 @@ export async function previewImport(kind: CsvKind, text: string): Promise<Import
 			const data = r.data as Record<string, unknown>;
 			const existing = (await service.findByNameAndMaker(String(data.name), String(data.maker))) as Record<string, unknown> | null;
 			if (!existing) return { ...base, action: 'create', changes: [] };
-			const changes = columns.filter((c) => historyText(cellOf(existing, c)) !== historyText(cellOf(data, c)));
+			const changes = columns
+				.map((field) => ({ field, from: historyText(cellOf(existing, field)), to: historyText(cellOf(data, field)) }))
+				.filter((c) => c.from !== c.to);
 			return { ...base, action: changes.length ? 'update' : 'unchanged', changes };
 		})
 	);
@@ -73,7 +86,7 @@ export async function previewImport(kind: CsvKind, text: string): Promise<Import
  */
 export async function applyImport(kind: CsvKind, text: string, actorId: number | null): Promise<{ created: number; updated: number; unchanged: number }> {
 	const { service, columns, schema } = CSV_KINDS[kind];
-	const parsed = parseModelsCsv(text, columns, schema);
+	const parsed = parseModelsCsv(text, columns, schema, await currencyNow());
 	if (parsed.fileErrors.length || parsed.rows.some((r) => !r.data)) {
 		throw new DomainError(422, 'The file has errors; nothing was imported.', csvErrorEnvelope(parsed));
 	}

@@ -12,6 +12,7 @@ import { quoteReference } from '$lib/quotes/reference';
 import { chargeTooLarge } from '$lib/quotes/hire-limits';
 import type { QuoteDetail } from '$lib/quotes/types';
 import { getSettings } from './settings';
+import { formatDateRange } from '$lib/format/dates';
 
 export const PAYMENT_SERVICE_DOWN =
 	'The payment service is not answering. Nothing was charged or changed; please try again in a minute.';
@@ -61,7 +62,7 @@ export async function issueStripeInvoice(quote: QuoteDetail, kind: 'deposit' | '
 	const currency = price.currency.toLowerCase();
 	return viaStripe(async () => {
 		const customer = await customerFor(quote.clientId);
-		const label = `${kind === 'deposit' ? `Deposit (${price.depositBp / 100} %)` : 'Balance'} for ${quoteReference(quote.id)} ${quote.eventName}, ${quote.startDate} to ${quote.endDate}`;
+		const label = `${kind === 'deposit' ? `Deposit (${price.depositBp / 100} %)` : 'Balance'} for ${quoteReference(quote.id)} ${quote.eventName}, ${formatDateRange(quote.startDate, quote.endDate)}`;
 		const draft = await stripe().invoices.create(
 			{
 				customer,

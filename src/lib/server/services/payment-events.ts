@@ -14,6 +14,7 @@ import { quoteReference } from '$lib/quotes/reference';
 import { getSettings, type Settings } from './settings';
 import { noteForDesk } from './desk-notices';
 import { isPaymentServiceDown, stripe } from '../payments/stripe-client';
+import { paidOutOfTurnIssue, stockShortIssue } from '$lib/bookings/issue-text';
 
 export type EventOutcome = { status: 200 | 503; outcome: string };
 
@@ -134,14 +135,13 @@ async function invoicePaid(object: Stripe.Invoice, ctx: Ctx): Promise<Applied> {
 
 	if (!nextStatus(quote.status, 'pay-deposit')) {
 		// Paid for a quote no longer waiting for it (e.g. cancelled meanwhile): keep the money visible to the desk.
-		await quote.update({ bookingIssue: `Deposit paid while the quote was ${quote.status}: refund or re-book it.` }, { transaction: t });
+		await quote.update({ bookingIssue: paidOutOfTurnIssue(quote.status) }, { transaction: t });
 		return { outcome: `deposit paid on a ${quote.status} quote; flagged`, emailIds };
 	}
 	await quote.update({ status: 'deposit-paid' }, { transaction: t });
 	const reservation = await reserveStockForQuote(quote.id, quote.currentVersion, t);
 	if (!reservation.ok) {
-		const missing = reservation.shortfalls.map((s) => `${s.name}: ${s.missing} short`).join('; ');
-		await quote.update({ bookingIssue: `Deposit paid but not enough units on the dates (${missing}).` }, { transaction: t });
+		await quote.update({ bookingIssue: stockShortIssue(reservation.shortfalls) }, { transaction: t });
 		emailIds.push(await emailTo(quote, bookingHeldUpEmail, ctx));
 		return { outcome: 'deposit paid; stock short, flagged for the desk', emailIds };
 	}

@@ -17,6 +17,7 @@ import type { QuoteDetail } from '$lib/quotes/types';
 import { getQuote } from './quotes';
 import { releaseBooking, shortfallsNow } from './bookings';
 import { getSettings, type Settings } from './settings';
+import { formatDate } from '$lib/format/dates';
 
 // Deposit and confirmation follow a paid invoice; nobody moves a quote there by hand.
 const STAFF_ACTIONS: readonly QuoteAction[] = ['send', 'accept', 'cancel', 'close'];
@@ -53,7 +54,7 @@ export function termsFor(quote: QuoteDetail, settings: Settings): string[] {
 /** Refusals that need no lock: checked before any money moves, so a refused accept changes nothing. */
 function refuseEarly(before: QuoteDetail, input: QuoteActionInput, actor: SessionUser): void {
 	if (input.action === 'accept' && isExpired(before.validUntil, today())) {
-		throw new DomainError(409, `This quote was valid until ${before.validUntil} and can no longer be accepted. Ask us for a fresh one.`);
+		throw new DomainError(409, `This quote was valid until ${formatDate(before.validUntil!)} and can no longer be accepted. Ask us for a fresh one.`);
 	}
 	if (input.action === 'accept' && actor.role === 'client' && input.acceptTerms !== true) {
 		throw new DomainError(422, 'Read the terms and tick the box to accept them.', { acceptTerms: ['Tick to confirm you accept the terms'] });

@@ -2,6 +2,7 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import { OPEN_STATUSES } from '$lib/quotes/states';
 import { Quote } from '../db/models';
 import { catalogueChanged } from './catalogue';
+import { formatDate } from '$lib/format/dates';
 import type { ModelType } from '$lib/inventory/types';
 
 
@@ -28,7 +29,7 @@ export async function flagQuotesForSpecChange(
 	const [count] = await Quote.update(
 		{
 			needsRecheck: true,
-			recheckReason: `A ${modelType} specification used by this quote changed on ${new Date().toISOString().slice(0, 10)}.`
+			recheckReason: `A ${modelType} specification used by this quote changed on ${formatDate(new Date())}.`
 		},
 		{ where: { id: rows.map((r) => r.id) }, transaction }
 	);
@@ -51,7 +52,7 @@ export async function flagQuotesForPackageChange(packageId: number, transaction?
 	const [count] = await Quote.update(
 		{
 			needsRecheck: true,
-			recheckReason: `The package used by this quote changed on ${new Date().toISOString().slice(0, 10)}.`
+			recheckReason: `The package used by this quote changed on ${formatDate(new Date())}.`
 		},
 		{ where: { id: rows.map((r) => r.id) }, transaction }
 	);

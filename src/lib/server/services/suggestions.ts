@@ -57,7 +57,7 @@ export async function suggestForDesk(input: QuoteRequestInput, options: { budget
 		closest: found.clear.length > 0 ? [] : presentSystems(found.closest, ctx),
 		complete: found.complete,
 		evaluated: found.evaluated,
-		obstacles: obstacleLines(found.obstacles),
+		obstacles: obstacleLines(found.obstacles, input.weighting),
 		currency: settings.currency
 	};
 }

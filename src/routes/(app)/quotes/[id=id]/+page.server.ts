@@ -1,5 +1,6 @@
 import { fail } from '@sveltejs/kit';
-import { canAny } from '$lib/permissions';
+import { can, canAny } from '$lib/permissions';
+import { cancelConsequences } from '$lib/quotes/cancel-consequence';
 import { allowedActions, isExpired, type QuoteAction } from '$lib/quotes/states';
 import type { QuoteActionInput } from '$lib/schemas/quotes';
 import { requireCapability } from '$lib/server/auth/guards';
@@ -12,14 +13,20 @@ import { getQuote } from '$lib/server/services/quotes';
 import { getSettings } from '$lib/server/services/settings';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
 
+const today = () => new Date().toISOString().slice(0, 10);
+
 export const load: PageServerLoad = async (event) => {
 	const user = requireCapability(event, 'quotes:read');
 	event.depends('app:quotes');
 	const [quote, settings] = await Promise.all([orHttpError(() => getQuote(Number(event.params.id), user)), getSettings()]);
-	const expired = quote.status === 'sent' && isExpired(quote.validUntil, new Date().toISOString().slice(0, 10));
+	const expired = quote.status === 'sent' && isExpired(quote.validUntil, today());
 	// getQuote already refused a client another organisation's quote, so the hire's state is theirs.
 	const booking = canAny(user.role, 'bookings:read', 'bookings:read-own') ? await bookingStateForClient(quote.id) : null;
-	return { quote, actions: allowedActions(quote.status), terms: termsFor(quote, settings), expired, booking };
+	const actions = allowedActions(quote.status);
+	const cancelNotice = actions.includes('cancel') && can(user.role, 'quotes:write')
+		? cancelConsequences({ status: quote.status, startDate: quote.startDate, today: today(), cancellationFullRefundDays: settings.cancellationFullRefundDays, invoices: quote.invoices })
+		: null;
+	return { quote, actions, terms: termsFor(quote, settings), expired, booking, cancelNotice };
 };
 
 /** The form's extra fields: the ticked terms box and the client's message. */
@@ -47,7 +54,13 @@ export const actions: Actions = {
 	accept: act('accept'),
 	decline: act('decline'),
 	requestChange: act('request-change'),
-	cancel: act('cancel'),
+	// Cancelling can refund a deposit and e-mails the client: the form must carry the ticked confirmation.
+	cancel: async (event) => {
+		requireCapability(event, 'quotes:write'); // a staff action: a client is refused before the form is read
+		const confirmed = (await event.request.clone().formData()).get('confirmCancel') === 'on';
+		if (!confirmed) return fail(400, { actionError: 'Tick “Yes, cancel this quote” to confirm. Nothing has changed.' });
+		return act('cancel')(event);
+	},
 	close: act('close'),
 	balanceInvoice: async (event) => {
 		const user = requireCapability(event, 'invoices:issue');
