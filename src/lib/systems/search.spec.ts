@@ -108,6 +108,37 @@ describe('suggestSystemsNow', () => {
 		expect(a.obstacles!.modelsRunOut).toContain('Speaker 1');
 	});
 
+	it('names the receiver in the way and offers the closest systems when every system meets the level but none keeps the neighbour within its limit', () => {
+		const catalogue: StockCatalogue = {
+			loudspeakers: [speaker(1, 'full-range', 100, 3000), speaker(11, 'subwoofer', 100, 3000)],
+			amplifiers: [amplifier(21, 4, 1200, 4000)],
+			available: { 'loudspeaker:1': 4, 'loudspeaker:11': 4, 'amplifier:21': 2 }
+		};
+		const result = suggestSystemsNow(catalogue, request(95, 20, behind(60)));
+		expect(result.clear).toEqual([]);
+		expect(result.closest.length).toBeGreaterThan(0);
+		expect(result.closest.every((c) => c.evaluation.outcome === 'over-limit')).toBe(true);
+		expect(result.obstacles!.bandsShort).toEqual([]);
+		expect(result.obstacles!.receiverOver).toMatchObject({ name: 'Behind', maxTargetDb: expect.any(Number) });
+		expect(result.obstacles!.receiverOver!.maxTargetDb!).toBeLessThan(95);
+	});
+
+	it('offers a subwoofer group pattern of the house when only it keeps the neighbour behind within its limit', () => {
+		const catalogue: StockCatalogue = {
+			loudspeakers: [speaker(1, 'full-range', 100, 3000), speaker(11, 'subwoofer', 100, 3000)],
+			amplifiers: [amplifier(21, 4, 1200, 4000)],
+			available: { 'loudspeaker:1': 4, 'loudspeaker:11': 4, 'amplifier:21': 2 },
+			groupPatterns: { 11: [{ directivity: rearRejecting, from: 'Test package' }] }
+		};
+		const without = suggestSystemsNow({ ...catalogue, groupPatterns: {} }, request(95, 20, behind(80)));
+		const withPattern = suggestSystemsNow(catalogue, request(95, 20, behind(80)));
+		expect(without.clear).toEqual([]);
+		expect(withPattern.clear.length).toBeGreaterThan(0);
+		const subs = withPattern.clear[0].groups.find((g) => g.loudspeaker.kind === 'subwoofer');
+		expect(subs?.directivity).toEqual(rearRejecting);
+		expect(subs!.count * subs!.stacks).toBeLessThanOrEqual(4);
+	});
+
 	it('stops at its time budget with the best so far', () => {
 		const catalogue: StockCatalogue = {
 			loudspeakers: [speaker(1, 'full-range', 100, 3000), speaker(11, 'subwoofer', 100, 3000)],
