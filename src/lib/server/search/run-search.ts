@@ -85,7 +85,13 @@ function startedWorker(): Worker {
 	started.unref(); // an idle search thread never keeps the app from exiting
 	started.on('message', (message: SearchMessage) => {
 		if (!running || message.id !== running.id) return;
-		if ('progress' in message) running.onProgress?.(message.progress);
+		if ('progress' in message) {
+			try {
+				running.onProgress?.(message.progress);
+			} catch {
+				// A listener whose answer has gone (the client left) must not take the process down.
+			}
+		}
 		else settle({ result: message.result });
 	});
 	started.on('error', (err) => worker === started && stopWorker(err));

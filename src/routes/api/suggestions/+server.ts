@@ -31,9 +31,18 @@ export const POST: RequestHandler = async (event) => {
 
 	const encoder = new TextEncoder();
 	let lastSent = 0;
+	// A client that went away cancels the stream; the search still ends at its deadline.
+	let open = true;
 	const stream = new ReadableStream<Uint8Array>({
 		async start(controller) {
-			const line = (value: unknown) => controller.enqueue(encoder.encode(`${JSON.stringify(value)}\n`));
+			const line = (value: unknown) => {
+				if (!open) return;
+				try {
+					controller.enqueue(encoder.encode(`${JSON.stringify(value)}\n`));
+				} catch {
+					open = false;
+				}
+			};
 			try {
 				const answer = await search.answer((checked) => {
 					if (Date.now() - lastSent < 150) return;
@@ -44,7 +53,13 @@ export const POST: RequestHandler = async (event) => {
 			} catch {
 				line({ problem: 'The search failed; try again.' });
 			}
-			controller.close();
+			if (open) {
+				open = false;
+				controller.close();
+			}
+		},
+		cancel() {
+			open = false;
 		}
 	});
 	return new Response(stream, { headers: { 'content-type': NDJSON, 'cache-control': 'no-store' } });
