@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { inlineSiteSchema } from '$lib/schemas/sites';
 import { useTestDatabase } from '../../../../tests/helpers/db';
-import { makeClientUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
+import { makeContactUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
 import { BOOKINGS, invalidate } from '../cache';
 import { Booking, BookingLine } from '../db/models';
 import { applyQuoteAction } from './quote-actions';
@@ -17,7 +17,7 @@ const request = {
 
 async function composedQuote() {
 	const desk = await makeStaffUser();
-	const { client } = await makeClientUser();
+	const { client } = await makeContactUser();
 	const { loudspeaker, amplifier, pkg } = await makeStockedPackage({ cabinets: 2, units: 2 });
 	const system = { groups: [{ loudspeakerModelId: loudspeaker.id, count: 1, stacks: 2 as const, amplifierModelId: amplifier.id, cabinetsPerChannel: 1 }] };
 	const quote = await createQuote({ clientId: client.id, eventName: 'Composed system fixture', system, request }, desk);
@@ -75,7 +75,7 @@ describe('a quote with a composed system', () => {
 
 	it('refuses models that are not in the inventory with a field error', async () => {
 		const desk = await makeStaffUser();
-		const { client } = await makeClientUser();
+		const { client } = await makeContactUser();
 		const system = { groups: [{ loudspeakerModelId: 999999, count: 1, stacks: 1 as const, amplifierModelId: 999999, cabinetsPerChannel: 1 }] };
 		await expect(createQuote({ clientId: client.id, eventName: 'Nothing', system, request }, desk)).rejects.toMatchObject({
 			status: 422,

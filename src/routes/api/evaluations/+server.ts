@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
 import { parseJsonBody } from '$lib/server/http';
-import { evaluationRequestSchema } from '$lib/schemas/evaluation';
+import { quoteRequestSchema } from '$lib/schemas/evaluation';
 import { orHttpError } from '$lib/server/services/errors';
 import { evaluateForDesk } from '$lib/server/services/evaluations';
 import type { RequestHandler } from './$types';
@@ -9,6 +9,6 @@ import type { RequestHandler } from './$types';
 /** Ranks every package against a request. −Infinity (a band no cabinet covers) travels as null. */
 export const POST: RequestHandler = async (event) => {
 	requireCapability(event, 'evaluations:run');
-	const input = await parseJsonBody(event.request, evaluationRequestSchema);
+	const input = await parseJsonBody(event.request, quoteRequestSchema);
 	return json(await orHttpError(() => evaluateForDesk(input)));
 };

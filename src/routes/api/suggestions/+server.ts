@@ -1,7 +1,7 @@
 import { error, json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
 import { parseJsonBody } from '$lib/server/http';
-import { evaluationRequestSchema } from '$lib/schemas/evaluation';
+import { quoteRequestSchema } from '$lib/schemas/evaluation';
 import { SearchBusyError } from '$lib/server/search/run-search';
 import { DomainError } from '$lib/server/services/errors';
 import { beginSuggestions, type SuggestionSearch } from '$lib/server/services/suggestions';
@@ -18,7 +18,7 @@ const NDJSON = 'application/x-ndjson';
  */
 export const POST: RequestHandler = async (event) => {
 	requireCapability(event, 'evaluations:run');
-	const input = await parseJsonBody(event.request, evaluationRequestSchema);
+	const input = await parseJsonBody(event.request, quoteRequestSchema);
 	let search: SuggestionSearch;
 	try {
 		search = await beginSuggestions(input);

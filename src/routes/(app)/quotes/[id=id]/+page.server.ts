@@ -5,8 +5,8 @@ import type { QuoteActionInput } from '$lib/schemas/quotes';
 import { requireCapability } from '$lib/server/auth/guards';
 import { DomainError, orHttpError } from '$lib/server/services/errors';
 import { applyQuoteAction, termsFor } from '$lib/server/services/quote-actions';
-import { hireStateForClient } from '$lib/server/services/booking-life';
-import { invoiceBalance } from '$lib/server/services/balance';
+import { bookingStateForClient } from '$lib/server/services/booking-life';
+import { createBalanceInvoice } from '$lib/server/services/balance-invoice';
 import { getQuote } from '$lib/server/services/quotes';
 import { getSettings } from '$lib/server/services/settings';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
@@ -17,8 +17,8 @@ export const load: PageServerLoad = async (event) => {
 	const [quote, settings] = await Promise.all([orHttpError(() => getQuote(Number(event.params.id), user)), getSettings()]);
 	const expired = quote.status === 'sent' && isExpired(quote.validUntil, new Date().toISOString().slice(0, 10));
 	// getQuote already refused a client another organisation's quote, so the hire's state is theirs.
-	const hire = canAny(user.role, 'bookings:read', 'bookings:read-own') ? await hireStateForClient(quote.id) : null;
-	return { quote, actions: allowedActions(quote.status), terms: termsFor(quote, settings), expired, hire };
+	const booking = canAny(user.role, 'bookings:read', 'bookings:read-own') ? await bookingStateForClient(quote.id) : null;
+	return { quote, actions: allowedActions(quote.status), terms: termsFor(quote, settings), expired, booking };
 };
 
 /** The form's extra fields: the ticked terms box and the client's message. */
@@ -48,11 +48,11 @@ export const actions: Actions = {
 	requestChange: act('request-change'),
 	cancel: act('cancel'),
 	close: act('close'),
-	balance: async (event) => {
+	balanceInvoice: async (event) => {
 		const user = requireCapability(event, 'invoices:issue');
 		try {
-			const outcome = await invoiceBalance(Number(event.params.id), user);
-			return { done: 'balance', mailSent: outcome.mailSent };
+			const outcome = await createBalanceInvoice(Number(event.params.id), user);
+			return { done: 'balance-invoice', mailSent: outcome.mailSent };
 		} catch (err) {
 			if (err instanceof DomainError) return fail(err.status, { actionError: err.message });
 			throw err;
