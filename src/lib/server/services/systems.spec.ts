@@ -58,7 +58,7 @@ describe('a quote with a composed system', () => {
 
 	it('keeps a group pattern the search offered: the neighbour behind allows a higher level at the position than with the plain group', async () => {
 		const desk = await makeStaffUser();
-		const { client } = await makeClientUser();
+		const { client } = await makeContactUser();
 		const { loudspeaker, amplifier } = await makeStockedPackage({ cabinets: 2, units: 2 });
 		const bands = ['63', '125', '250', '500', '1000', '2000', '4000', '8000'];
 		const rearRejecting = { anglesDeg: [0, 90, 180], bandsDb: Object.fromEntries(bands.map((b) => [b, [0, 6, 20]])) };
