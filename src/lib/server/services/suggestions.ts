@@ -57,7 +57,9 @@ export async function beginSuggestions(input: QuoteRequestInput, options: { budg
 	const groupPatterns = groupPatternsOf(packages);
 	const catalogue: StockCatalogue = { loudspeakers: speakerRows, amplifiers: ampRows, available, groupPatterns };
 	const patterns = Object.values(groupPatterns).flat() as GroupPattern[];
-	const search = claimSearch(options.budgetMs ?? searchBudgetMs(speakerRows.length + ampRows.length));
+	// The budget grows with the models in stock on the dates: the search space, not the whole inventory.
+	const inStock = Object.values(available).filter((n) => (n ?? 0) > 0).length;
+	const search = claimSearch(options.budgetMs ?? searchBudgetMs(inStock));
 	const ctx = { request, startDate: input.startDate, endDate: input.endDate, priceSettings: priceSettingsOf(settings), inService, reservations };
 
 	return {
