@@ -6,6 +6,16 @@ import type { LoadedGroup, LoadedPackage } from '../inventory';
 import type { GroupPattern } from './chains';
 import type { Candidate, Obstacles } from './search';
 
+/** The answer to a search: systems that clear the limits, the closest ones if none does, and why. */
+export interface Suggestions {
+	systems: SuggestedSystem[];
+	closest: SuggestedSystem[];
+	complete: boolean;
+	evaluated: number;
+	obstacles: string[];
+	currency: string;
+}
+
 export interface SystemGroup {
 	loudspeakerModelId: number;
 	loudspeakerName: string;

@@ -8,7 +8,7 @@ import { reservedOn, type ModelKey } from '$lib/quotes/availability';
 import { toModelRequest } from '$lib/quotes/request';
 import { searchBudgetMs, type GroupPattern, type StockCatalogue } from '$lib/systems';
 import type { LoadedPackage } from '$lib/inventory';
-import { obstacleLines, presentSystems, type SuggestedSystem } from '$lib/systems/present';
+import { obstacleLines, presentSystems, type Suggestions } from '$lib/systems/present';
 import { BOOKINGS, CATALOGUE, cached } from '../cache';
 import { claimSearch } from '../search/run-search';
 import { reservationsOverlapping, unitsInService } from './catalogue';
@@ -19,15 +19,6 @@ import { listLoadedPackages } from './inventory-packages';
 import { loudspeakers } from './inventory-loudspeakers';
 import { findProgramme, toProgramme } from './programmes';
 import { getSettings, priceSettingsOf } from './settings';
-
-export interface Suggestions {
-	systems: SuggestedSystem[];
-	closest: SuggestedSystem[];
-	complete: boolean;
-	evaluated: number;
-	obstacles: string[];
-	currency: string;
-}
 
 export interface SuggestionSearch {
 	/** Runs the search (once) and answers; `onProgress` hears the count of systems checked so far. */

@@ -1,6 +1,6 @@
 import { error, json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseJsonBody } from '$lib/server/http';
+import { parseJsonBody } from '$lib/server/http/parse';
 import { quoteRequestSchema } from '$lib/schemas/evaluation';
 import { SearchBusyError } from '$lib/server/search/run-search';
 import { DomainError } from '$lib/server/services/errors';

@@ -5,11 +5,10 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import type { z } from 'zod';
 import { formFieldOf, quoteRequestFormSchema, type QuoteRequestForm } from '$lib/schemas/quotes';
 import { Client } from '../db';
-import type { SessionUser } from '../users';
-import { DomainError } from './errors';
-import { listProgrammes } from './programmes';
-import { getSettings } from './settings';
-import { listSites } from './sites';
+import { DomainError } from '../services/errors';
+import { listProgrammes } from '../services/programmes';
+import { getSettings } from '../services/settings';
+import { listSites } from '../services/sites';
 
 export async function quoteRequestFormOptions() {
 	const [clients, programmes, settings, sites] = await Promise.all([
@@ -54,5 +53,3 @@ export async function saveFromForm<S extends z.ZodType>(
 	}
 	redirect(303, `/quotes/${id}`);
 }
-
-export type { SessionUser };
