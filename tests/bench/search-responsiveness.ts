@@ -73,12 +73,18 @@ async function bumpCatalogue(db: Sequelize): Promise<void> {
 	await db.query("INSERT INTO cache_stamps (name, version) VALUES ('catalogue', 1) ON DUPLICATE KEY UPDATE version = version + 1", { type: QueryTypes.INSERT });
 }
 
-/** Clones demo models (sensitivity and rate varied a little) with ready units until there are 40. */
+/** Models with ready units: what the search's budget counts (other tests may leave models without units). */
+async function modelsInStock(db: Sequelize): Promise<number> {
+	const [{ n }] = await select(db, "SELECT COUNT(DISTINCT modelType, COALESCE(loudspeakerModelId, amplifierModelId)) AS n FROM stock_units WHERE status = 'ready'");
+	return Number(n);
+}
+
+/** Clones demo models (sensitivity and rate varied a little) with ready units until 40 are in stock. */
 async function growTo40(db: Sequelize): Promise<number> {
 	const now = new Date();
 	for (const table of ['loudspeaker_models', 'amplifier_models'] as const) {
 		const rows = await select(db, `SELECT * FROM ${table} WHERE name NOT LIKE :tag ORDER BY id`, { tag: `%${TAG}` });
-		const [{ n }] = await select(db, 'SELECT (SELECT COUNT(*) FROM loudspeaker_models) + (SELECT COUNT(*) FROM amplifier_models) AS n');
+		const n = await modelsInStock(db);
 		const share = table === 'loudspeaker_models' ? Math.ceil(((TARGET_MODELS - Number(n)) * 2) / 3) : TARGET_MODELS - Number(n);
 		for (let i = 0; i < share; i++) {
 			const { id: _id, ...row } = rows[i % rows.length];
@@ -99,8 +105,7 @@ async function growTo40(db: Sequelize): Promise<number> {
 		}
 	}
 	await bumpCatalogue(db);
-	const [{ n }] = await select(db, 'SELECT (SELECT COUNT(*) FROM loudspeaker_models) + (SELECT COUNT(*) FROM amplifier_models) AS n');
-	return Number(n);
+	return modelsInStock(db);
 }
 
 async function removeClones(db: Sequelize): Promise<void> {
@@ -129,7 +134,7 @@ export async function measureSearchResponsiveness(env: NodeJS.ProcessEnv, origin
 		const search = suggest(origin, salesCookie);
 		const during = await healthWhile(origin, search);
 		const large = await search;
-		rows.push({ metric: `POST /api/suggestions, ${models} models (${large.complete ? 'complete' : 'stopped at its budget, best so far'}; ${large.evaluated} systems)`, value: large.ms, unit: 'ms', target: '≤ 10000 ms + reading the stock', ok: large.status === 200 && large.ms <= 10_500 });
+		rows.push({ metric: `POST /api/suggestions, ${models} models in stock (${large.complete ? 'complete' : 'stopped at its budget, best so far'}; ${large.evaluated} systems)`, value: large.ms, unit: 'ms', target: '≤ 10000 ms + reading the stock', ok: large.status === 200 && large.ms <= 10_500 });
 		rows.push({ metric: `/api/health p95 during that search (${during.length} requests at ${HEALTH_PER_S}/s) vs idle (${idle.length})`, value: p95(during), unit: 'ms', baseline: p95(idle), ratio: p95(during) / p95(idle), target: 'ratio ≤ 3' , ok: p95(during) / p95(idle) <= 3 });
 	} finally {
 		await removeClones(db);

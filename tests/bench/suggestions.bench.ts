@@ -118,13 +118,15 @@ export function runSuggestionsBench(): { results: SuggestionBench[]; baselineOps
 	return { results, baselineOpsPerSec: baseline };
 }
 
-/** The same searches through the app's worker thread, after one search to start it and warm it up. */
+/** The same searches through the app's worker thread, after one pass to start it and warm it up. */
 export async function runWorkerBench(inProcess: SuggestionBench[]): Promise<Row[]> {
 	const cases = [
 		{ catalogue: demoLikeCatalogue, budgetMs: 2000 },
 		{ catalogue: fortyModelCatalogue, budgetMs: 10_000 }
 	];
-	await claimSearch(300)(demoLikeCatalogue, benchRequest);
+	// This process's JIT is warm from the acoustics rows and the in-process searches; the worker's
+	// is warmed by one pass of the same searches, so the ratio compares warm with warm.
+	for (const c of cases) await claimSearch(c.budgetMs)(c.catalogue, benchRequest);
 	const rows: Row[] = [];
 	for (const [i, c] of cases.entries()) {
 		const start = performance.now();
