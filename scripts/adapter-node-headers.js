@@ -1,6 +1,8 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import adapter from '@sveltejs/adapter-node';
+import { nodeResolve } from '@rollup/plugin-node-resolve';
+import { rollup } from 'rollup';
 import { SECURITY_HEADERS } from '../src/lib/server/security-headers.js';
 
 /**
@@ -24,6 +26,25 @@ export default function adapterNodeWithHeaders(options) {
 			if (!source.includes(anchor)) throw new Error(`adapter-node-headers: ${anchor} not found in ${entry}`);
 			const middleware = `((headers) => (req, res, next) => { for (const [name, value] of Object.entries(headers)) res.setHeader(name, value); next(); })(${JSON.stringify(SECURITY_HEADERS)})`;
 			writeFileSync(entry, source.replace(anchor, `.use(${middleware}, handler)`));
+			await bundleSearchWorker(builder.getServerDirectory(), options.out);
 		}
 	};
+}
+
+/**
+ * The suggestion search's worker thread (src/lib/server/search/search-worker.ts), emitted by the
+ * server build as its own entry (vite.config.ts), as one file beside the app's server code:
+ * adapter-node bundles only what its entries import, and a worker is started by path, not imported.
+ * @param {string} serverDir the Vite server output
+ * @param {string} out the build folder
+ */
+async function bundleSearchWorker(serverDir, out) {
+	const pkg = JSON.parse(readFileSync('package.json', 'utf8'));
+	const bundle = await rollup({
+		input: path.join(serverDir, 'search-worker.js'),
+		external: [/^node:/, ...Object.keys(pkg.dependencies || {}).map((d) => new RegExp(`^${d}(\\/.*)?$`))],
+		plugins: [nodeResolve({ preferBuiltins: true, exportConditions: ['node'] })]
+	});
+	await bundle.write({ file: path.join(out, 'server', 'search-worker.js'), format: 'esm', inlineDynamicImports: true });
+	await bundle.close();
 }

@@ -12,7 +12,8 @@ import { runLevelMapBench } from './level-map.bench';
 import { catalogueRows, measureCatalogues, type CatalogueResult } from './catalogue-suite';
 import { clusterRows, measureCluster, stopCluster } from './cluster-load';
 import { EVALUATION_BODY, httpRows, LOAD, measureHttp } from './http-suite';
-import { runSuggestionsBench, suggestionsRows } from './suggestions.bench';
+import { runSuggestionsBench, runWorkerBench, suggestionsRows } from './suggestions.bench';
+import { measureSearchResponsiveness } from './search-responsiveness';
 import type { LoadResult } from './http-load';
 import { pageWeight, type PageWeight } from './page-weight';
 import { stopAll } from './proc';
@@ -65,8 +66,9 @@ async function main(): Promise<void> {
 	const acoustics = runAcousticsBench();
 	log('level map (levelGrid + contours, 100 × 100, in this process)');
 	const levelMaps = runLevelMapBench();
-	log('suggestion search (demo-sized and 40-model catalogues, in this process)');
+	log('suggestion search (demo-sized and 40-model catalogues, in this process and in the search worker thread)');
 	const suggestions = runSuggestionsBench();
+	const suggestionWorker = await runWorkerBench(suggestions.results);
 
 	log('setting up the bench world from nothing (MariaDB, migrate, seed, fakes, build, boot)…');
 	let world: World;
@@ -74,6 +76,7 @@ async function main(): Promise<void> {
 	let clusterLoad: LoadResult[];
 	let catalogues: CatalogueResult[];
 	let stamps: Row;
+	let searchRows: Row[];
 	const pages: PageWeight[] = [];
 	try {
 		world = await setUpWorld();
@@ -86,6 +89,7 @@ async function main(): Promise<void> {
 		const cookies = new Map<string, string>();
 		for (const who of [SALES, WAREHOUSE]) cookies.set(who, await sessionCookie(who));
 		load = await measureHttp(world.origin, cookies.get(SALES)!, log);
+		searchRows = await measureSearchResponsiveness(world.env, world.origin, cookies.get(SALES)!, log);
 		log('weighing the JavaScript of the main pages');
 		for (const p of PAGES)
 			pages.push(
@@ -121,6 +125,8 @@ async function main(): Promise<void> {
 		{ metric: 'app boot (node build → /api/health 200)', value: world.bootS, unit: 's' },
 		...acousticsRows(acoustics),
 		...suggestionsRows(suggestions),
+		...suggestionWorker,
+		...searchRows,
 		...levelMaps.map((m) => ({
 			metric: m.name,
 			value: m.opsPerSec,
@@ -178,12 +184,13 @@ async function main(): Promise<void> {
 }
 
 /** Only the rows measured in this process: no database, no app, nothing to tear down. */
-function inProcessOnly(): void {
+async function inProcessOnly(): Promise<void> {
 	const started = Date.now();
 	log('acoustic model (in this process only)');
 	const acoustics = runAcousticsBench();
-	log('suggestion search (in this process only)');
-	const rows = [...acousticsRows(acoustics), ...suggestionsRows(runSuggestionsBench())];
+	log('suggestion search (in this process and in the search worker thread)');
+	const suggestions = runSuggestionsBench();
+	const rows = [...acousticsRows(acoustics), ...suggestionsRows(suggestions), ...(await runWorkerBench(suggestions.results))];
 	console.log(
 		`\nThrowline bench, in-process rows — ${new Date().toISOString()} (${((Date.now() - started) / 1000).toFixed(0)} s)\n`
 	);

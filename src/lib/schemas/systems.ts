@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { optionalDirectivitySchema } from './directivity';
 
 /** One group of a composed or suggested system, by model ids (the same channel-plan rules as packages). */
 export const systemGroupSchema = z.object({
@@ -8,7 +9,9 @@ export const systemGroupSchema = z.object({
 	amplifierModelId: z.number().int().positive(),
 	cabinetsPerChannel: z.number().int().min(1).max(16),
 	heightM: z.number().min(0).max(30).nullable().optional(),
-	flown: z.boolean().optional()
+	flown: z.boolean().optional(),
+	/** The group pattern (e.g. subwoofers in a cardioid arrangement), as a package group has it. */
+	directivity: optionalDirectivitySchema
 });
 
 export const systemSchema = z.object({

@@ -1,8 +1,9 @@
 /**
  * The search space of a suggestion, as chains: a chain fixes everything about a group but its
- * cabinet count (model, stacks, amplifier, cabinets per channel). Along a chain more cabinets never
- * lower capability, so a chain is searched with counts ascending and stops when clear.
+ * cabinet count (model, stacks, amplifier, cabinets per channel, group pattern). Along a chain more
+ * cabinets never lower capability, so a chain is searched with counts ascending and stops when clear.
  */
+import type { DirectivityTable } from '$lib/schemas/directivity';
 import { channelPlanErrors, channelsNeeded, type AmplifierModelRow, type LoadedGroup, type LoudspeakerModelRow } from '../inventory';
 import type { ModelKey } from '../quotes/availability';
 import type { ModelType } from '../inventory/types';
@@ -12,7 +13,24 @@ export interface StockCatalogue {
 	amplifiers: AmplifierModelRow[];
 	/** Units free on the hire dates, per model. */
 	available: Partial<Record<ModelKey, number>>;
+	/**
+	 * Group patterns the house has for a subwoofer model (from its packages' groups, e.g. a cardioid
+	 * arrangement), by loudspeaker model id: each is a chain option of its own.
+	 */
+	groupPatterns?: Partial<Record<number, GroupPattern[]>>;
 }
+
+/** A group pattern and where it comes from (the package whose group has it). */
+export interface GroupPattern {
+	directivity: DirectivityTable;
+	from: string;
+}
+
+/**
+ * Common practice: an arrangement that shapes a pattern (a cardioid block) needs at least two
+ * cabinets in each stack, one of them turned or delayed.
+ */
+export const MIN_PATTERN_CABINETS = 2;
 
 export interface Chain {
 	role: 'main' | 'sub';
@@ -20,6 +38,8 @@ export interface Chain {
 	amplifier: AmplifierModelRow;
 	stacks: 1 | 2;
 	cabinetsPerChannel: number;
+	/** The group's own pattern, or null for the loudspeaker's own. */
+	pattern: GroupPattern | null;
 	/** Fewest and most cabinets per stack the stock allows on this chain. */
 	minCount: number;
 	maxCount: number;
@@ -48,6 +68,7 @@ export function groupOf(chain: Chain, count: number, position: number): LoadedGr
 		flown: kind === 'line-array-element',
 		heightM: HEIGHT_M[kind] ?? 1.5,
 		spacingM: null,
+		directivity: chain.pattern?.directivity ?? null,
 		loudspeaker: chain.loudspeaker,
 		amplifier: chain.amplifier
 	};
@@ -57,7 +78,10 @@ function amplifiersFor(chain: Pick<Chain, 'amplifier'>, channels: number): numbe
 	return Math.ceil(channels / chain.amplifier.channels);
 }
 
-/** Every chain of one role the stock can build, deterministic order (model id, stacks, amp id, cpc). */
+/**
+ * Every chain of one role the stock can build, cheapest first; ties keep the order of model id,
+ * pattern (the loudspeaker's own first), stacks, amplifier id, cabinets per channel.
+ */
 export function chainsOf(catalogue: StockCatalogue, role: 'main' | 'sub'): Chain[] {
 	const kinds = role === 'main' ? ['full-range', 'line-array-element'] : ['subwoofer'];
 	const speakers = catalogue.loudspeakers.filter((l) => kinds.includes(l.kind)).sort((a, b) => a.id - b.id);
@@ -65,7 +89,8 @@ export function chainsOf(catalogue: StockCatalogue, role: 'main' | 'sub'): Chain
 	const chains: Chain[] = [];
 	for (const loudspeaker of speakers) {
 		const cabinets = freeUnits(catalogue, 'loudspeaker', loudspeaker.id);
-		for (const stacks of [1, 2] as const) {
+		const patterns = role === 'sub' ? (catalogue.groupPatterns?.[loudspeaker.id] ?? []) : [];
+		for (const pattern of [null, ...patterns]) for (const stacks of [1, 2] as const) {
 			const maxBySpeakers = Math.floor(cabinets / stacks);
 			if (maxBySpeakers < 1) continue;
 			for (const amplifier of amps) {
@@ -76,8 +101,9 @@ export function chainsOf(catalogue: StockCatalogue, role: 'main' | 'sub'): Chain
 					if (Object.keys(channelPlanErrors([plan])).length > 0) break; // lower loads only get worse
 					let maxCount = maxBySpeakers;
 					while (maxCount >= cabinetsPerChannel && amplifiersFor({ amplifier }, channelsNeeded({ count: maxCount, stacks, cabinetsPerChannel })) > ampsFree) maxCount--;
-					if (maxCount < cabinetsPerChannel) continue;
-					const chain: Chain = { role, loudspeaker, amplifier, stacks, cabinetsPerChannel, minCount: cabinetsPerChannel, maxCount, minDayCost: 0 };
+					const minCount = pattern ? Math.max(cabinetsPerChannel, MIN_PATTERN_CABINETS) : cabinetsPerChannel;
+					if (maxCount < minCount) continue;
+					const chain: Chain = { role, loudspeaker, amplifier, stacks, cabinetsPerChannel, pattern, minCount, maxCount, minDayCost: 0 };
 					chain.minDayCost = dayCost([groupOf(chain, chain.minCount, 0)]);
 					chains.push(chain);
 				}

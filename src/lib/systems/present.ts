@@ -1,7 +1,9 @@
 /** A found system as the desk sees it: priced like a package, with a line on why it is offered. Pure. */
 import { formatMoney } from '../quotes/pricing';
 import { evaluateOne, type EvaluationContext, type PackageResult } from '../quotes/evaluate-packages';
+import type { DirectivityTable } from '$lib/schemas/directivity';
 import type { LoadedGroup, LoadedPackage } from '../inventory';
+import type { GroupPattern } from './chains';
 import type { Candidate, Obstacles } from './search';
 
 /** The answer to a search: systems that clear the limits, the closest ones if none does, and why. */
@@ -24,6 +26,10 @@ export interface SystemGroup {
 	cabinetsPerChannel: number;
 	heightM: number | null;
 	flown: boolean;
+	/** The group pattern (e.g. a cardioid arrangement), or null for the loudspeaker's own. */
+	directivity: DirectivityTable | null;
+	/** The package the group pattern comes from. */
+	patternFrom: string | null;
 }
 
 export interface SuggestedSystem extends PackageResult {
@@ -34,7 +40,13 @@ export interface SuggestedSystem extends PackageResult {
 	why: string;
 }
 
-export function systemGroups(groups: readonly LoadedGroup[]): SystemGroup[] {
+/** The package a group's pattern was taken from, by the table itself. */
+export function patternSource(patterns: readonly GroupPattern[]): (table: DirectivityTable | null | undefined) => string | null {
+	const from = new Map(patterns.map((p) => [JSON.stringify(p.directivity), p.from]));
+	return (table) => (table ? (from.get(JSON.stringify(table)) ?? 'a package') : null);
+}
+
+export function systemGroups(groups: readonly LoadedGroup[], patternFrom: ReturnType<typeof patternSource> = patternSource([])): SystemGroup[] {
 	return groups.map((g) => ({
 		loudspeakerModelId: g.loudspeaker.id,
 		loudspeakerName: g.loudspeaker.name,
@@ -44,13 +56,15 @@ export function systemGroups(groups: readonly LoadedGroup[]): SystemGroup[] {
 		amplifierName: g.amplifier.name,
 		cabinetsPerChannel: g.cabinetsPerChannel,
 		heightM: g.heightM ?? null,
-		flown: g.flown
+		flown: g.flown,
+		directivity: g.directivity ?? null,
+		patternFrom: patternFrom(g.directivity)
 	}));
 }
 
 /** A name from its lines: "2 × 2 Top A + 2 × Sub B" (stacks × cabinets each, when there are two stacks). */
 export function systemName(groups: readonly LoadedGroup[]): string {
-	return groups.map((g) => `${g.stacks > 1 ? `${g.stacks} × ${g.count}` : g.count} × ${g.loudspeaker.name}`).join(' + ');
+	return groups.map((g) => `${g.stacks > 1 ? `${g.stacks} × ${g.count}` : g.count} × ${g.loudspeaker.name}${g.directivity ? ' (group pattern)' : ''}`).join(' + ');
 }
 
 function whyLine(result: PackageResult, index: number, first: PackageResult | undefined): string {
@@ -64,14 +78,15 @@ function whyLine(result: PackageResult, index: number, first: PackageResult | un
 }
 
 /** Prices and checks each candidate like a package (the same availability and pricing rules). */
-export function presentSystems(candidates: readonly Candidate[], ctx: EvaluationContext): SuggestedSystem[] {
+export function presentSystems(candidates: readonly Candidate[], ctx: EvaluationContext, patterns: readonly GroupPattern[] = []): SuggestedSystem[] {
+	const patternFrom = patternSource(patterns);
 	const results = candidates.map((c, i) => {
 		const pkg: LoadedPackage = { id: 0, name: systemName(c.groups), slug: `system-${i + 1}`, description: '', active: true, createdAt: '', updatedAt: '', groups: c.groups };
 		return evaluateOne(pkg, ctx);
 	});
 	return results.map((r, i) => ({
 		...r,
-		groups: systemGroups(candidates[i].groups),
+		groups: systemGroups(candidates[i].groups, patternFrom),
 		totalMinor: r.price.totalMinor,
 		weightKg: r.billOfMaterials.totalWeightKg,
 		mainsCurrentA: r.billOfMaterials.mainsCurrentAmps,
@@ -92,8 +107,8 @@ export function obstacleLines(o: Obstacles | null, weighting: string): string[] 
 /** A system's groups as the quote's `system` body (and the request form's hidden field). */
 export function systemFormValue(s: Pick<SuggestedSystem, 'groups'>): string {
 	return JSON.stringify({
-		groups: s.groups.map(({ loudspeakerModelId, count, stacks, amplifierModelId, cabinetsPerChannel, heightM, flown }) => ({
-			loudspeakerModelId, count, stacks, amplifierModelId, cabinetsPerChannel, heightM, flown
+		groups: s.groups.map(({ loudspeakerModelId, count, stacks, amplifierModelId, cabinetsPerChannel, heightM, flown, directivity }) => ({
+			loudspeakerModelId, count, stacks, amplifierModelId, cabinetsPerChannel, heightM, flown, ...(directivity ? { directivity } : {})
 		}))
 	});
 }

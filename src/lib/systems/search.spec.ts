@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { evaluatePackage, type QuoteRequest } from '../acoustics';
 import { toPackageSpec, type AmplifierModelRow, type LoadedGroup, type LoudspeakerModelRow } from '../inventory';
-import { chainsOf, dayCost, groupOf, unitsOverStock, type StockCatalogue } from './chains';
-import { suggestSystemsNow } from './search';
+import { chainsOf, dayCost, groupOf, MIN_PATTERN_CABINETS, unitsOverStock, type StockCatalogue } from './chains';
+import { searchBudgetMs, suggestSystemsNow } from './search';
 
 // Round-figure test models, not the demo stock.
 const stamp = { createdAt: '2027-01-01T00:00:00.000Z', updatedAt: '2027-01-01T00:00:00.000Z' };
@@ -23,9 +23,13 @@ function amplifier(id: number, channels: number, powerW8: number, dayRateMinor: 
 	} as unknown as AmplifierModelRow;
 }
 const programme = { bandsDb: { 63: 0, 125: 0, 250: 0, 500: 0, 1000: 0, 2000: 0, 4000: 0 }, crestFactorDb: 12 };
-const request = (targetDb: number, distanceM: number): QuoteRequest => ({
-	targetDb, weighting: 'A', distanceM, programme, air: { temperatureC: 20, humidityPct: 50 }, marginDb: 3
+const request = (targetDb: number, distanceM: number, site?: QuoteRequest['site']): QuoteRequest => ({
+	targetDb, weighting: 'A', distanceM, programme, air: { temperatureC: 20, humidityPct: 50 }, marginDb: 3, ...(site ? { site } : {})
 });
+/** A round-figure pattern that rejects the rear at low frequencies, as a cardioid arrangement does. */
+const rearRejecting = { anglesDeg: [0, 90, 180], bandsDb: { '63': [0, 6, 20], '125': [0, 6, 16] } };
+/** A neighbour straight behind the system with a dB(C) limit, where a group pattern matters. */
+const behind = (limitDb: number): QuoteRequest['site'] => ({ aimDeg: 0, groundFactor: 0.5, receivers: [{ name: 'Behind', x: 0, y: -80, limitDb, weighting: 'C' }] });
 
 /** Every system the search space holds, evaluated: the slow truth the search must agree with. */
 function exhaustiveCheapest(catalogue: StockCatalogue, req: QuoteRequest): number | null {
@@ -47,7 +51,7 @@ function exhaustiveCheapest(catalogue: StockCatalogue, req: QuoteRequest): numbe
 const catalogueArb = fc
 	.record({
 		mains: fc.array(fc.record({ sens: fc.integer({ min: 94, max: 104 }), rate: fc.integer({ min: 10, max: 90 }), free: fc.integer({ min: 0, max: 4 }) }), { minLength: 1, maxLength: 2 }),
-		subs: fc.array(fc.record({ sens: fc.integer({ min: 94, max: 104 }), rate: fc.integer({ min: 10, max: 90 }), free: fc.integer({ min: 0, max: 4 }) }), { maxLength: 2 }),
+		subs: fc.array(fc.record({ sens: fc.integer({ min: 94, max: 104 }), rate: fc.integer({ min: 10, max: 90 }), free: fc.integer({ min: 0, max: 4 }), pattern: fc.boolean() }), { maxLength: 2 }),
 		amps: fc.array(fc.record({ ch: fc.integer({ min: 1, max: 4 }), w: fc.integer({ min: 200, max: 2000 }), rate: fc.integer({ min: 10, max: 90 }), free: fc.integer({ min: 0, max: 3 }) }), { minLength: 1, maxLength: 2 })
 	})
 	.map(({ mains, subs, amps }): StockCatalogue => {
@@ -57,15 +61,17 @@ const catalogueArb = fc
 		mains.forEach((m, i) => (available[`loudspeaker:${i + 1}`] = m.free));
 		subs.forEach((s, i) => (available[`loudspeaker:${i + 11}`] = s.free));
 		amps.forEach((a, i) => (available[`amplifier:${i + 21}`] = a.free));
-		return { loudspeakers, amplifiers, available };
+		const groupPatterns: StockCatalogue['groupPatterns'] = {};
+		subs.forEach((s, i) => s.pattern && (groupPatterns[i + 11] = [{ directivity: rearRejecting, from: 'Test package' }]));
+		return { loudspeakers, amplifiers, available, groupPatterns };
 	});
 
 describe('suggestSystemsNow', () => {
 	it('finds the same cheapest clear system as trying every system, and never more units than are free', () => {
-		const seen = { clear: 0, none: 0 };
+		const seen = { clear: 0, none: 0, pattern: 0 };
 		fc.assert(
-			fc.property(catalogueArb, fc.integer({ min: 88, max: 106 }), fc.integer({ min: 10, max: 40 }), (catalogue, target, distance) => {
-				const req = request(target, distance);
+			fc.property(catalogueArb, fc.integer({ min: 88, max: 106 }), fc.integer({ min: 10, max: 40 }), fc.option(fc.integer({ min: 70, max: 100 })), (catalogue, target, distance, limit) => {
+				const req = request(target, distance, limit === null ? undefined : behind(limit));
 				const result = suggestSystemsNow(catalogue, req, { budgetMs: 60_000 });
 				expect(result.complete).toBe(true);
 				const truth = exhaustiveCheapest(catalogue, req);
@@ -73,14 +79,18 @@ describe('suggestSystemsNow', () => {
 				seen[truth === null ? 'none' : 'clear']++;
 				for (const c of [...result.clear, ...result.closest]) expect(unitsOverStock(c.groups, catalogue)).toEqual([]);
 				for (const c of result.clear) expect(c.evaluation.outcome).toBe('clear');
+				for (const c of [...result.clear, ...result.closest]) for (const g of c.groups) if (g.directivity) expect(g.count).toBeGreaterThanOrEqual(MIN_PATTERN_CABINETS);
+				if (result.clear[0]?.groups.some((g) => g.directivity)) seen.pattern++;
 				const costs = result.clear.map((c) => c.dayCostMinor);
 				expect(costs).toEqual([...costs].sort((a, b) => a - b));
 			}),
-			{ numRuns: 60, seed: 12 }
+			{ numRuns: 120, seed: 12 }
 		);
 		// Both sides of the question were asked, not only catalogues where nothing can be clear.
 		expect(seen.clear).toBeGreaterThan(10);
 		expect(seen.none).toBeGreaterThan(5);
+		// …and some where the cheapest clear system needs a group pattern.
+		expect(seen.pattern).toBeGreaterThan(0);
 	});
 
 	it('is deterministic and says what stands in the way when nothing can be clear', () => {
@@ -98,6 +108,37 @@ describe('suggestSystemsNow', () => {
 		expect(a.obstacles!.modelsRunOut).toContain('Speaker 1');
 	});
 
+	it('names the receiver in the way and offers the closest systems when every system meets the level but none keeps the neighbour within its limit', () => {
+		const catalogue: StockCatalogue = {
+			loudspeakers: [speaker(1, 'full-range', 100, 3000), speaker(11, 'subwoofer', 100, 3000)],
+			amplifiers: [amplifier(21, 4, 1200, 4000)],
+			available: { 'loudspeaker:1': 4, 'loudspeaker:11': 4, 'amplifier:21': 2 }
+		};
+		const result = suggestSystemsNow(catalogue, request(95, 20, behind(60)));
+		expect(result.clear).toEqual([]);
+		expect(result.closest.length).toBeGreaterThan(0);
+		expect(result.closest.every((c) => c.evaluation.outcome === 'over-limit')).toBe(true);
+		expect(result.obstacles!.bandsShort).toEqual([]);
+		expect(result.obstacles!.receiverOver).toMatchObject({ name: 'Behind', maxTargetDb: expect.any(Number) });
+		expect(result.obstacles!.receiverOver!.maxTargetDb!).toBeLessThan(95);
+	});
+
+	it('offers a subwoofer group pattern of the house when only it keeps the neighbour behind within its limit', () => {
+		const catalogue: StockCatalogue = {
+			loudspeakers: [speaker(1, 'full-range', 100, 3000), speaker(11, 'subwoofer', 100, 3000)],
+			amplifiers: [amplifier(21, 4, 1200, 4000)],
+			available: { 'loudspeaker:1': 4, 'loudspeaker:11': 4, 'amplifier:21': 2 },
+			groupPatterns: { 11: [{ directivity: rearRejecting, from: 'Test package' }] }
+		};
+		const without = suggestSystemsNow({ ...catalogue, groupPatterns: {} }, request(95, 20, behind(80)));
+		const withPattern = suggestSystemsNow(catalogue, request(95, 20, behind(80)));
+		expect(without.clear).toEqual([]);
+		expect(withPattern.clear.length).toBeGreaterThan(0);
+		const subs = withPattern.clear[0].groups.find((g) => g.loudspeaker.kind === 'subwoofer');
+		expect(subs?.directivity).toEqual(rearRejecting);
+		expect(subs!.count * subs!.stacks).toBeLessThanOrEqual(4);
+	});
+
 	it('stops at its time budget with the best so far', () => {
 		const catalogue: StockCatalogue = {
 			loudspeakers: [speaker(1, 'full-range', 100, 3000), speaker(11, 'subwoofer', 100, 3000)],
@@ -107,5 +148,16 @@ describe('suggestSystemsNow', () => {
 		let t = 0;
 		const result = suggestSystemsNow(catalogue, request(104, 30), { now: () => (t += 1000), budgetMs: 1500, yieldEvery: 1 });
 		expect(result.complete).toBe(false);
+	});
+});
+
+describe('searchBudgetMs', () => {
+	it('gives 2 s to a demo-sized catalogue and 10 s to 40 models, never more', () => {
+		expect(searchBudgetMs(11)).toBe(2000);
+		expect(searchBudgetMs(15)).toBe(2000);
+		expect(searchBudgetMs(40)).toBe(10_000);
+		expect(searchBudgetMs(400)).toBe(10_000);
+		expect(searchBudgetMs(28)).toBeGreaterThan(2000);
+		expect(searchBudgetMs(28)).toBeLessThan(10_000);
 	});
 });

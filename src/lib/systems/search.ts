@@ -1,16 +1,28 @@
 /**
  * Suggest: the cheapest systems in stock that are clear for a request. A system is a main group
- * (full-range or line-array elements) and optionally a subwoofer group. Chains of each role are
- * sorted by their cheapest member; a pair of chains is searched as a staircase (main count up,
- * sub count down from the last clear one), since more cabinets never lower capability. A pair
- * whose largest system is short in headroom is hopeless and skipped after one evaluation.
- * Pure and deterministic; runs as a generator so a caller can yield to the event loop.
+ * (full-range or line-array elements) and optionally a subwoofer group, which may have a group
+ * pattern of the house's (a cardioid arrangement). Chains of each role are sorted by their
+ * cheapest member; a pair of chains is searched as a staircase (main count up, sub count down
+ * from the last clear one), since more cabinets never lower capability: the fewest subs that meet
+ * the target are found by bisection, then counts from there up are tried until one is clear at
+ * every receiver too (receivers do not grow monotonically with the mix). A pair whose largest
+ * system is short in headroom is hopeless and skipped after one evaluation.
+ * Pure and deterministic; runs as a generator so a caller can report progress.
  */
 import { evaluatePackage, OUTCOME_ORDER, type Evaluation, type QuoteRequest } from '../acoustics';
 import { toPackageSpec, type LoadedGroup } from '../inventory';
 import { chainsOf, dayCost, groupOf, unitsOverStock, type Chain, type StockCatalogue } from './chains';
 
 export const DEFAULT_BUDGET_MS = 2000;
+/** The issue's targets: 2 s on a catalogue the size of the demo's (15 models), 10 s on 40 models. */
+const BUDGET_AT = { models: 15, ms: DEFAULT_BUDGET_MS, largeModels: 40, largeMs: 10_000 } as const;
+
+/** How long a search over `models` loudspeaker and amplifier models in stock may run, ms. */
+export function searchBudgetMs(models: number): number {
+	const { models: small, ms, largeModels, largeMs } = BUDGET_AT;
+	if (models <= small) return ms;
+	return Math.round(Math.min(largeMs, ms + ((models - small) * (largeMs - ms)) / (largeModels - small)));
+}
 export const MAX_SYSTEMS = 5;
 
 export interface Candidate {
@@ -39,7 +51,7 @@ export interface SearchResult {
 export interface SearchOptions {
 	budgetMs?: number;
 	now?: () => number;
-	/** Yield a progress count every this many evaluations. */
+	/** Yield a progress count every this many evaluations (the deadline is checked after each). */
 	yieldEvery?: number;
 }
 
@@ -80,8 +92,8 @@ export function* searchSystems(catalogue: StockCatalogue, request: QuoteRequest,
 	let complete = true;
 
 	const bound = () => (clear.length < MAX_SYSTEMS ? Infinity : clear[MAX_SYSTEMS - 1].dayCostMinor);
-	function evaluate(groups: LoadedGroup[], record = true): Candidate | null {
-		if (unitsOverStock(groups, catalogue).length > 0) return null;
+	function evaluate(groups: LoadedGroup[], record = true, inStockOnly = true): Candidate | null {
+		if (inStockOnly && unitsOverStock(groups, catalogue).length > 0) return null;
 		evaluated++;
 		let evaluation: Evaluation;
 		try {
@@ -110,8 +122,11 @@ export function* searchSystems(catalogue: StockCatalogue, request: QuoteRequest,
 			const sub = subs[next.j];
 			const floor = main.minDayCost + (sub?.minDayCost ?? 0) - (sub && sub.amplifier.id === main.amplifier.id ? maxAmpRate : 0);
 			if (floor >= bound()) continue;
-			// The largest system of the pair: if even it is short of the margin, the pair is hopeless.
-			const largest = evaluate(build(main, main.maxCount, sub, sub?.maxCount ?? 0), false);
+			// The largest system of the pair, stock or not: capability only grows with cabinets, so if even
+			// it is short of the margin every system of the pair is, and the pair is hopeless. (It may need
+			// more amplifiers than the two groups can share; it is a bound then, never a candidate.)
+			const largestGroups = build(main, main.maxCount, sub, sub?.maxCount ?? 0);
+			const largest = evaluate(largestGroups, false, false);
 			if (largest) for (const b of largest.evaluation.bands) bestBand.set(b.hz, Math.max(bestBand.get(b.hz) ?? -Infinity, b.headroomDb));
 			yield evaluated;
 			if (now() > deadline) {
@@ -120,42 +135,53 @@ export function* searchSystems(catalogue: StockCatalogue, request: QuoteRequest,
 			}
 			if (!largest) continue;
 			if (!meetsTarget(largest)) {
-				keep(closest, largest, closer);
+				if (unitsOverStock(largestGroups, catalogue).length === 0) keep(closest, largest, closer);
 				continue;
 			}
 			let sTop = sub?.maxCount ?? 0;
 			const sMin = sub?.minCount ?? 0;
 			for (let m = main.minCount; m <= main.maxCount; m++) {
-				// Fewest subs that make this main count clear: a binary search, since more never lowers capability.
+				const fits = (s: number) => unitsOverStock(build(main, m, sub, s), catalogue).length === 0;
+				if (!fits(sMin)) break; // more mains need more units still
 				let hi = sTop;
-				while (hi >= sMin && dayCost(build(main, m, sub, hi)) >= bound()) hi--;
+				while (hi >= sMin && (!fits(hi) || dayCost(build(main, m, sub, hi)) >= bound())) hi--;
+				const top = hi;
+				// Fewest subs that meet the target with this main count: a binary search, since more never
+				// lowers capability.
 				let lo = sMin;
 				let lowest: number | null = null;
-				let found: Candidate | null = null;
 				while (lo <= hi) {
 					const mid = (lo + hi) >> 1;
 					const c = evaluate(build(main, m, sub, mid), false);
-					if (evaluated % yieldEvery === 0) {
-						yield evaluated;
-						if (now() > deadline) { complete = false; break search; }
-					}
+					if (evaluated % yieldEvery === 0) yield evaluated;
+					// The clock after every evaluation: a large system with a site can take milliseconds.
+					if (now() > deadline) { complete = false; break search; }
 					if (c && meetsTarget(c)) {
 						lowest = mid;
-						found = c;
 						hi = mid - 1;
 					} else {
 						if (c) keep(closest, c, closer);
 						lo = mid + 1;
 					}
 				}
-				if (found) {
-					if (found.evaluation.outcome === 'clear') keep(clear, found, byCost);
-					else keep(closest, found, closer);
+				if (lowest === null) continue;
+				// Receivers are not monotone in the mix (more subs can push a neighbour over, a group
+				// pattern can pull it back), so from the fewest up each count is tried until one is clear.
+				let clearAt: number | null = null;
+				for (let s = lowest; s <= top; s++) {
+					if (s > lowest && dayCost(build(main, m, sub, s)) >= bound()) break;
+					const c = evaluate(build(main, m, sub, s));
+					if (evaluated % yieldEvery === 0) yield evaluated;
+					// The clock after every evaluation: a large system with a site can take milliseconds.
+					if (now() > deadline) { complete = false; break search; }
+					if (c?.evaluation.outcome === 'clear') {
+						clearAt = s;
+						break;
+					}
 				}
-				if (lowest !== null) {
-					if (lowest === sMin) break; // more mains only cost more
-					sTop = lowest - 1; // the staircase: with more mains only fewer subs can be worth a look
-				}
+				if (clearAt === null) continue;
+				if (clearAt === sMin) break; // more mains only cost more
+				sTop = clearAt - 1; // the staircase: with more mains only fewer subs can be cheaper
 			}
 		}
 	}

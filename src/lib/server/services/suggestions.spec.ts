@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { useTestDatabase } from '../../../../tests/helpers/db';
 import { DomainError } from './errors';
-import { suggestForDesk } from './suggestions';
+import { SearchBusyError } from '../search/run-search';
+import { beginSuggestions, suggestForDesk } from './suggestions';
 
 useTestDatabase();
 
@@ -25,4 +26,15 @@ describe('suggestForDesk', () => {
 	it('refuses an unknown programme like an evaluation does', async () => {
 		await expect(suggestForDesk({ ...request, programme: 'no-such-profile' })).rejects.toBeInstanceOf(DomainError);
 	});
+
+	it('searches in a worker thread, one at a time per process: a second search meanwhile is refused as busy', async () => {
+		const first = await beginSuggestions(request);
+		const second = beginSuggestions(request);
+		await expect(second).rejects.toBeInstanceOf(SearchBusyError);
+		await expect(second).rejects.toMatchObject({ status: 503, retryAfterSeconds: expect.any(Number) });
+		const answer = await first.answer();
+		expect(answer.systems.length).toBeGreaterThan(0);
+		// The place is given back when the search ends.
+		expect((await suggestForDesk(request)).systems.length).toBeGreaterThan(0);
+	}, 30_000);
 });

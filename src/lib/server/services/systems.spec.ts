@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { inlineSiteSchema } from '$lib/schemas/sites';
 import { useTestDatabase } from '../../../../tests/helpers/db';
 import { makeContactUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
 import { BOOKINGS, invalidate } from '../cache';
@@ -53,6 +54,23 @@ describe('a quote with a composed system', () => {
 		expect(booked.ok).toBe(true);
 		const lines = await BookingLine.findAll({ where: { bookingId: (booked as { bookingId: number }).bookingId } });
 		expect(lines.find((l) => l.modelType === 'loudspeaker')?.quantity).toBe(2);
+	});
+
+	it('keeps a group pattern the search offered: the neighbour behind allows a higher level at the position than with the plain group', async () => {
+		const desk = await makeStaffUser();
+		const { client } = await makeContactUser();
+		const { loudspeaker, amplifier } = await makeStockedPackage({ cabinets: 2, units: 2 });
+		const bands = ['63', '125', '250', '500', '1000', '2000', '4000', '8000'];
+		const rearRejecting = { anglesDeg: [0, 90, 180], bandsDb: Object.fromEntries(bands.map((b) => [b, [0, 6, 20]])) };
+		const site = inlineSiteSchema.parse({ name: 'Fixture field', receivers: [{ name: 'Behind', x: 0, y: -120, limitDb: 90, weighting: 'C' }] });
+		const group = { loudspeakerModelId: loudspeaker.id, count: 2, stacks: 1 as const, amplifierModelId: amplifier.id, cabinetsPerChannel: 1 };
+		const behindOf = async (system: { groups: (typeof group & { directivity?: typeof rearRejecting })[] }) => {
+			const quote = await createQuote({ clientId: client.id, eventName: 'Group pattern fixture', system, request: { ...request, site } }, desk);
+			return quote.result.limits!.maxTargetDb!;
+		};
+		const plain = await behindOf({ groups: [group] });
+		const patterned = await behindOf({ groups: [{ ...group, directivity: rearRejecting }] });
+		expect(patterned).toBeGreaterThan(plain + 10);
 	});
 
 	it('refuses models that are not in the inventory with a field error', async () => {

@@ -37,6 +37,7 @@ export async function loadSystem(system: SystemInput): Promise<LoadedPackage> {
 			flown: g.flown ?? loudspeaker.kind === 'line-array-element',
 			heightM: g.heightM ?? DEFAULT_HEIGHT_M[loudspeaker.kind] ?? 1.5,
 			spacingM: null,
+			directivity: g.directivity ?? null,
 			loudspeaker,
 			amplifier: ampById.get(g.amplifierModelId)!
 		};
