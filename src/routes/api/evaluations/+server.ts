@@ -1,14 +1,18 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
 import { parseJsonBody } from '$lib/server/http';
-import { evaluationRequestSchema } from '$lib/schemas/evaluation';
+import { evaluationWithSystemSchema } from '$lib/schemas/systems';
 import { orHttpError } from '$lib/server/services/errors';
 import { evaluateForDesk } from '$lib/server/services/evaluations';
+import { loadSystem } from '$lib/server/services/systems';
 import type { RequestHandler } from './$types';
 
-/** Ranks every package against a request. −Infinity (a band no cabinet covers) travels as null. */
+/**
+ * Ranks every package against a request; with an inline `system` (the composer), evaluates and
+ * prices that system alone. −Infinity (a band no cabinet covers) travels as null.
+ */
 export const POST: RequestHandler = async (event) => {
 	requireCapability(event, 'evaluations:run');
-	const input = await parseJsonBody(event.request, evaluationRequestSchema);
-	return json(await orHttpError(() => evaluateForDesk(input)));
+	const { system, ...input } = await parseJsonBody(event.request, evaluationWithSystemSchema);
+	return json(await orHttpError(async () => evaluateForDesk(input, system ? { packages: [await loadSystem(system)] } : {})));
 };
