@@ -3,7 +3,7 @@
  * the desk can offer it again. The groups are taken as the quote evaluated them (heights and
  * flown filled in), so the package sounds the same as the system did.
  */
-import { Op } from 'sequelize';
+import { Op, QueryTypes } from 'sequelize';
 import type { PackageRow } from '$lib/inventory/types';
 import { freeSlug, slugFromName } from '$lib/inventory/package-slug';
 import { quoteReference } from '$lib/quotes/reference';
@@ -47,4 +47,35 @@ export async function promoteSystem(quoteId: number, input: PromoteInput, actorI
 		if (err instanceof DomainError && err.status === 409 && err.errors?.slug) throw new DomainError(409, NAME_TAKEN, { name: [NAME_TAKEN] });
 		throw err;
 	});
+}
+
+export interface SystemOnQuote {
+	quoteId: number;
+	reference: string;
+	systemName: string;
+	startDate: string;
+	status: string;
+}
+
+/**
+ * The latest quotes whose current version offers a composed or suggested system: where the
+ * warehouse, who does not read quotes, finds systems worth keeping as packages.
+ */
+export async function systemsOnQuotes(limit = 20): Promise<SystemOnQuote[]> {
+	const rows = await Quote.sequelize!.query<{ id: number; name: string | null; startDate: string | Date; status: string }>(
+		`SELECT q.id, JSON_VALUE(v.evaluation, '$.packageName') AS name, v.startDate, q.status
+		   FROM quotes q
+		   JOIN quote_versions v ON v.quoteId = q.id AND v.version = q.currentVersion
+		  WHERE v.system IS NOT NULL AND q.status <> 'cancelled'
+		  ORDER BY q.updatedAt DESC, q.id DESC
+		  LIMIT :limit`,
+		{ type: QueryTypes.SELECT, replacements: { limit } }
+	);
+	return rows.map((r) => ({
+		quoteId: r.id,
+		reference: quoteReference(r.id),
+		systemName: r.name ?? '',
+		startDate: r.startDate instanceof Date ? r.startDate.toISOString().slice(0, 10) : String(r.startDate).slice(0, 10),
+		status: r.status
+	}));
 }

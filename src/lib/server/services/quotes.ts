@@ -17,6 +17,7 @@ import type { SessionUser } from '../users';
 import { DomainError } from './errors';
 import { evaluateForDesk } from './evaluations';
 import { loadSystem } from './systems';
+import type { SystemInput } from '$lib/schemas/systems';
 
 export interface QuoteSummary {
 	id: number;
@@ -45,6 +46,8 @@ export interface QuoteDetail extends QuoteSummary {
 	result: PackageResult;
 	/** The copy of the site this version was evaluated with; null without a site. */
 	site: SiteSnapshot | null;
+	/** The composed or suggested system this version offers; null when it offers a package. */
+	system: SystemInput | null;
 	notes: string | null;
 	recheckReason: string | null;
 	versions: { version: number; createdAt: string; packageName: string; totalMinor: number }[];
@@ -313,6 +316,7 @@ export async function getQuote(id: number, actor: SessionUser): Promise<QuoteDet
 		request: current.request,
 		result: current.evaluation,
 		site: current.site ?? null,
+		system: current.system ?? null,
 		notes: current.notes,
 		recheckReason: quote.recheckReason,
 		versions: versions.map((v) => ({

@@ -1,5 +1,5 @@
 import { fail } from '@sveltejs/kit';
-import { canAny } from '$lib/permissions';
+import { can, canAny } from '$lib/permissions';
 import { allowedActions, isExpired, type QuoteAction } from '$lib/quotes/states';
 import type { QuoteActionInput } from '$lib/schemas/quotes';
 import { requireCapability } from '$lib/server/auth/guards';
@@ -8,6 +8,7 @@ import { applyQuoteAction, termsFor } from '$lib/server/services/quote-actions';
 import { hireStateForClient } from '$lib/server/services/booking-life';
 import { invoiceBalance } from '$lib/server/services/balance';
 import { getQuote } from '$lib/server/services/quotes';
+import { promoteSystem } from '$lib/server/services/package-promotion';
 import { getSettings } from '$lib/server/services/settings';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
 
@@ -18,7 +19,8 @@ export const load: PageServerLoad = async (event) => {
 	const expired = quote.status === 'sent' && isExpired(quote.validUntil, new Date().toISOString().slice(0, 10));
 	// getQuote already refused a client another organisation's quote, so the hire's state is theirs.
 	const hire = canAny(user.role, 'bookings:read', 'bookings:read-own') ? await hireStateForClient(quote.id) : null;
-	return { quote, actions: allowedActions(quote.status), terms: termsFor(quote, settings), expired, hire };
+	const canPromote = quote.system !== null && can(user.role, 'inventory:edit');
+	return { quote, actions: allowedActions(quote.status), terms: termsFor(quote, settings), expired, hire, canPromote };
 };
 
 /** The form's extra fields: the ticked terms box and the client's message. */
@@ -48,6 +50,17 @@ export const actions: Actions = {
 	requestChange: act('request-change'),
 	cancel: act('cancel'),
 	close: act('close'),
+	promote: async (event) => {
+		const user = requireCapability(event, 'inventory:edit');
+		const name = String((await event.request.formData()).get('name') ?? '').slice(0, 400);
+		try {
+			const created = await promoteSystem(Number(event.params.id), { name, description: '' }, user.id);
+			return { promoted: { id: created.id, name: created.name } };
+		} catch (err) {
+			if (err instanceof DomainError) return fail(err.status, { promoteError: err.errors?.name?.[0] ?? err.message, promoteName: name });
+			throw err;
+		}
+	},
 	balance: async (event) => {
 		const user = requireCapability(event, 'invoices:issue');
 		try {
