@@ -1,14 +1,15 @@
 /**
  * Composing a system, end to end: sales enters a request no package is clear for, asks for
  * suggestions, adjusts one by hand in the composer (one more cabinet), sees the live result change,
- * saves and sends the quote; the client sees the composed system's lines. Then the composer on a
- * 390 px phone: no sideways scrolling, and axe finds nothing serious.
+ * saves and sends the quote; the client sees the composed system's lines; the warehouse saves it
+ * as a package. Then the composer on a 390 px phone: no sideways scrolling, and axe finds nothing serious.
  */
 import type { Browser, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { blocking, runAxe } from './a11y/axe';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
 import { api, sessionCookie } from './http';
+import { quoteReference } from '../../src/lib/quotes/reference';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -19,6 +20,7 @@ afterAll(async () => {
 });
 
 const SALES = 'sales@kestrel-yard.test';
+const WAREHOUSE = 'warehouse@kestrel-yard.test';
 const CLIENT = 'Millbrook Riverside Food Festival';
 const CLIENT_EMAIL = 'organiser@millbrook-riverside.test';
 // A loud show at 40 m: checked below against the running app, not assumed from the demo data.
@@ -108,6 +110,28 @@ describe('composing a system, end to end', () => {
 			expect(body).toContain(line.replace(/^[\d ×]+/, '').trim());
 		}
 		await page.close();
+	}, 60_000);
+
+	it('the warehouse saves the quote’s system as a package; the same name again is refused on the field', async () => {
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, WAREHOUSE);
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${BASE_URL}/inventory/packages`);
+		const reference = quoteReference(Number(new URL(quoteUrl).pathname.split('/').pop()));
+		const name = `Headline rig ${Date.now().toString(36)}`;
+		await page.getByLabel(`Package name for ${reference}`).fill(name);
+		await page.getByLabel(`Package name for ${reference}`).locator('xpath=..').getByRole('button', { name: 'Save as a package' }).click();
+		const saved = page.getByRole('status').getByRole('link', { name });
+		await saved.waitFor();
+		const packageId = (await saved.getAttribute('href'))!.split('/').pop();
+
+		await page.getByLabel(`Package name for ${reference}`).fill(name.toUpperCase());
+		await page.getByLabel(`Package name for ${reference}`).locator('xpath=..').getByRole('button', { name: 'Save as a package' }).click();
+		await page.getByText('Another package already has this name').waitFor();
+		await page.close();
+		// Withdrawn again, so the request above stays one no package is clear for on a second run.
+		const withdrawn = await api(`/api/packages/${packageId}`, { cookie: await sessionCookie(WAREHOUSE), method: 'PATCH', body: { active: false } });
+		expect(withdrawn.status).toBe(200);
 	}, 60_000);
 
 	it('the composer works on a 390 px phone: no sideways scrolling, nothing serious for axe', async () => {
