@@ -11,11 +11,14 @@ import { startMailRetry } from '$lib/server/mail/retry';
 import { db } from '$lib/server/db';
 
 /**
- * Once per server start: messages the SMTP server did not take are retried on a timer. On shutdown
- * (adapter-node's event, after the server closed) the timer stops and the pool closes: a retry pass
- * every few seconds would otherwise keep the pool, and so the process, alive after SIGTERM.
+ * Once per server start: the database models are registered first (the retry timer queries them
+ * before any request may have come), then messages the SMTP server did not take are retried on a
+ * timer. On shutdown (adapter-node's event, after the server closed) the timer stops and the pool
+ * closes: a retry pass every few seconds would otherwise keep the pool, and so the process, alive
+ * after SIGTERM.
  */
 export const init: ServerInit = () => {
+	db();
 	const retry = startMailRetry();
 	process.once('sveltekit:shutdown', () => {
 		retry.stop();

@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { payOnHostedPage, CARD_SUCCEEDS } from '../fakes/stripe/testing';
 import { useTestDatabase } from '../helpers/db';
-import { makeClientUser, makeStockedPackage } from '../helpers/inventory';
+import { makeContactUser, makeStockedPackage } from '../helpers/inventory';
 import { BookingLine, Quote } from '../../src/lib/server/db/models';
 import { bumpStamp } from '../../src/lib/server/cache-stamps';
 import { call, eventually, PROCESS_A, PROCESS_B, PROXY, SALES, signIn } from './cluster';
@@ -20,7 +20,7 @@ describe('booking the last units across processes', () => {
 	it('six deposits paid at once for stock that fits one hire: one booking', async () => {
 		const { pkg, loudspeaker } = await makeStockedPackage({ cabinets: 2, units: 2, amplifierUnits: 6 });
 		await bumpStamp('catalogue'); // written straight to the database: tell the processes
-		const { client } = await makeClientUser();
+		const { client } = await makeContactUser();
 		const sales = await signIn(SALES);
 		const clientCookie = await signIn(client.email, 'x-password-123');
 

@@ -29,8 +29,8 @@ import {
 import { packagePatchSchema, packageSchema } from '../../src/lib/schemas/inventory-packages';
 import { stockUnitPatchSchema, stockUnitSchema } from '../../src/lib/schemas/inventory-units';
 import { repairSchema, scanSchema } from '../../src/lib/schemas/bookings';
-import { evaluationRequestSchema } from '../../src/lib/schemas/evaluation';
-import { evaluationWithSystemSchema, promoteSchema } from '../../src/lib/schemas/systems';
+import { quoteRequestSchema } from '../../src/lib/schemas/evaluation';
+import { quoteRequestWithSystemSchema, promoteSchema } from '../../src/lib/schemas/systems';
 import {
 	quoteActionSchema,
 	quoteCreateSchema,
@@ -74,8 +74,8 @@ type Target =
 const TARGETS: Record<string, Target> = {
 	'POST /api/users': { as: 'admin', body: 'json', schema: userCreateSchema },
 	'PATCH /api/users/[id=id]': { as: 'admin', body: 'json', schema: userUpdateSchema },
-	'POST /api/evaluations': { as: 'sales', body: 'json', schema: evaluationWithSystemSchema },
-	'POST /api/suggestions': { as: 'sales', body: 'json', schema: evaluationRequestSchema },
+	'POST /api/evaluations': { as: 'sales', body: 'json', schema: quoteRequestWithSystemSchema },
+	'POST /api/suggestions': { as: 'sales', body: 'json', schema: quoteRequestSchema },
 	'POST /api/clients': { as: 'sales', body: 'json', schema: clientSchema },
 	'PATCH /api/clients/[id=id]': { as: 'sales', body: 'json', schema: clientUpdateSchema },
 	// Open to the signed-out: asking for a link is how they get back in.
@@ -94,15 +94,15 @@ const TARGETS: Record<string, Target> = {
 	'PATCH /api/amplifiers/[id=id]': { as: 'warehouse', body: 'json', schema: amplifierPatchSchema },
 	'POST /api/packages': { as: 'warehouse', body: 'json', schema: packageSchema },
 	'PATCH /api/packages/[id=id]': { as: 'warehouse', body: 'json', schema: packagePatchSchema },
-	'POST /api/units': { as: 'warehouse', body: 'json', schema: stockUnitSchema },
-	'PATCH /api/units/[id=id]': { as: 'warehouse', body: 'json', schema: stockUnitPatchSchema },
+	'POST /api/stock-units': { as: 'warehouse', body: 'json', schema: stockUnitSchema },
+	'PATCH /api/stock-units/[id=id]': { as: 'warehouse', body: 'json', schema: stockUnitPatchSchema },
 	'POST /api/quotes': { as: 'sales', body: 'json', schema: quoteCreateSchema },
 	'PATCH /api/quotes/[id=id]': { as: 'sales', body: 'json', schema: quoteReviseSchema },
 	'POST /api/quotes/[id=id]/actions': { as: 'sales', body: 'json', schema: quoteActionSchema },
 	'POST /api/quotes/[id=id]/package': { as: 'warehouse', body: 'json', schema: promoteSchema },
 	'POST /api/bookings/[id=id]/dispatch': { as: 'warehouse', body: 'json', schema: scanSchema },
 	'POST /api/bookings/[id=id]/return': { as: 'warehouse', body: 'json', schema: scanSchema },
-	'POST /api/units/[id=id]/repairs': { as: 'warehouse', body: 'json', schema: repairSchema },
+	'POST /api/stock-units/[id=id]/repairs': { as: 'warehouse', body: 'json', schema: repairSchema },
 	'POST /api/quotes/[id=id]/balance-invoice': { as: 'sales', body: 'ignored', status: 404 }, // no such quote
 	'POST /api/webhooks/stripe': { as: 'out', body: 'ignored', status: 400 }, // no signature, whatever the body
 	'POST /api/loudspeakers/import': {

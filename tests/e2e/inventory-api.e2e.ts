@@ -57,7 +57,7 @@ describe('loudspeaker and amplifier API', () => {
 		const ids = await makeFixtures(cookies.admin);
 		expect((await api(`/api/loudspeakers/${ids.speakerId}`, { cookie: cookies.warehouse, method: 'DELETE' })).status).toBe(409);
 		expect((await api(`/api/amplifiers/${ids.ampId}`, { cookie: cookies.warehouse, method: 'DELETE' })).status).toBe(409);
-		expect((await api(`/api/units/${ids.unitId}`, { cookie: cookies.warehouse, method: 'DELETE' })).status).toBe(204);
+		expect((await api(`/api/stock-units/${ids.unitId}`, { cookie: cookies.warehouse, method: 'DELETE' })).status).toBe(204);
 		expect((await api(`/api/packages/${ids.packageId}`, { cookie: cookies.warehouse, method: 'DELETE' })).status).toBe(204);
 		expect((await api(`/api/loudspeakers/${ids.speakerId}`, { cookie: cookies.warehouse, method: 'DELETE' })).status).toBe(204);
 		expect((await api(`/api/loudspeakers/${ids.speakerId}`, { cookie: cookies.warehouse })).status).toBe(404);

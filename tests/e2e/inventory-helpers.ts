@@ -69,7 +69,7 @@ export async function makeFixtures(adminCookie: string) {
 		method: 'POST',
 		body: { name: `E2E kit ${tag()}`, slug: `e2e-kit-${tag()}`, groups: [{ loudspeakerModelId: speaker.json.id, amplifierModelId: amp.json.id, count: 2, stacks: 2, cabinetsPerChannel: 1 }] }
 	});
-	const unit = await api('/api/units', { cookie: adminCookie, method: 'POST', body: { serial: `E2E-${tag()}`, modelType: 'loudspeaker', modelId: speaker.json.id } });
+	const unit = await api('/api/stock-units', { cookie: adminCookie, method: 'POST', body: { serial: `E2E-${tag()}`, modelType: 'loudspeaker', modelId: speaker.json.id } });
 	for (const made of [speaker, amp, pkg, unit]) if (made.status !== 201) throw new Error(`fixture failed: ${JSON.stringify(made.json)}`);
 	return { speakerId: speaker.json.id as number, ampId: amp.json.id as number, packageId: pkg.json.id as number, unitId: unit.json.id as number };
 }

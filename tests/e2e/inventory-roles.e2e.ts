@@ -98,9 +98,9 @@ describe('inventory API by role', () => {
 		'/api/packages',
 		`/api/packages/${ids.packageId}`,
 		`/api/packages/${ids.packageId}/history`,
-		'/api/units',
-		`/api/units/${ids.unitId}`,
-		`/api/units/${ids.unitId}/history`
+		'/api/stock-units',
+		`/api/stock-units/${ids.unitId}`,
+		`/api/stock-units/${ids.unitId}/history`
 	];
 
 	it('reads: 401 signed out, 403 client, 200 for staff', async () => {
@@ -125,7 +125,7 @@ describe('inventory API by role', () => {
 				['PATCH loudspeaker', (await api(`/api/loudspeakers/${ids.speakerId}`, { cookie, method: 'PATCH', body: { notes: `touched by ${who}` } })).status, 200],
 				['PATCH amplifier', (await api(`/api/amplifiers/${ids.ampId}`, { cookie, method: 'PATCH', body: { notes: `touched by ${who}` } })).status, 200],
 				['PATCH package', (await api(`/api/packages/${ids.packageId}`, { cookie, method: 'PATCH', body: { description: `by ${who}` } })).status, 200],
-				['PATCH unit', (await api(`/api/units/${ids.unitId}`, { cookie, method: 'PATCH', body: { location: `shelf ${who}` } })).status, 200],
+				['PATCH unit', (await api(`/api/stock-units/${ids.unitId}`, { cookie, method: 'PATCH', body: { location: `shelf ${who}` } })).status, 200],
 				['import', (await api('/api/amplifiers/import?preview=1', { cookie, method: 'POST', body: {} })).status, 400]
 			];
 			for (const [label, status, ok] of checks) {
@@ -137,7 +137,7 @@ describe('inventory API by role', () => {
 	});
 
 	it('DELETE by sales is 403 and the record stays', async () => {
-		expect((await api(`/api/units/${ids.unitId}`, { cookie: cookies.sales, method: 'DELETE' })).status).toBe(403);
-		expect((await api(`/api/units/${ids.unitId}`, { cookie: cookies.sales })).status).toBe(200);
+		expect((await api(`/api/stock-units/${ids.unitId}`, { cookie: cookies.sales, method: 'DELETE' })).status).toBe(403);
+		expect((await api(`/api/stock-units/${ids.unitId}`, { cookie: cookies.sales })).status).toBe(200);
 	});
 });

@@ -64,7 +64,7 @@ describe('scanning out and back', () => {
 		expect(unknown.status).toBe(409);
 		expect(unknown.json.message).toMatch(/No unit has the serial NOT-A-UNIT-1/);
 		expect(unknown.json.errors.serial).toHaveLength(1);
-		expect((await api(`/api/units/${own.speakers[2].id}`, { cookie: sessions.admin, method: 'PATCH', body: { lastTestedAt: '2001-01-01' } })).status).toBe(200);
+		expect((await api(`/api/stock-units/${own.speakers[2].id}`, { cookie: sessions.admin, method: 'PATCH', body: { lastTestedAt: '2001-01-01' } })).status).toBe(200);
 		const overdue = await scan('dispatch', own.speakers[2].serial);
 		expect(overdue.status).toBe(409);
 		expect(overdue.json.message).toMatch(/overdue for its electrical safety test/);
@@ -92,11 +92,11 @@ describe('scanning out and back', () => {
 
 describe('repairs', () => {
 	it('records repairs with validation; done returns a unit in repair to ready; sales reads, clients may not', async () => {
-		const url = `/api/units/${own.speakers[0].id}/repairs`;
+		const url = `/api/stock-units/${own.speakers[0].id}/repairs`;
 		const bad = await api(url, { cookie: sessions.warehouse, method: 'POST', body: { description: '', costMinor: 12.5, done: 'yes' } });
 		expect(bad.status).toBe(422);
 		expect(Object.keys(bad.json.errors).sort()).toEqual(['costMinor', 'description', 'done']);
-		await api(`/api/units/${own.speakers[0].id}`, { cookie: sessions.admin, method: 'PATCH', body: { status: 'in-repair' } });
+		await api(`/api/stock-units/${own.speakers[0].id}`, { cookie: sessions.admin, method: 'PATCH', body: { status: 'in-repair' } });
 		const done = await api(url, { cookie: sessions.warehouse, method: 'POST', body: { description: 'Driver replaced', costMinor: 8900, done: true } });
 		expect(done.status).toBe(201);
 		expect(done.json.status).toBe('ready');
@@ -104,7 +104,7 @@ describe('repairs', () => {
 		expect(list.json[0]).toMatchObject({ description: 'Driver replaced', costMinor: 8900, done: true });
 		expect((await api(url, { cookie: sessions.sales, method: 'POST', body: { description: 'x', costMinor: 0, done: false } })).status).toBe(403);
 		expect((await api(url, { cookie: sessions.client })).status).toBe(403);
-		expect((await api('/api/units/4294967295/repairs', { cookie: sessions.admin })).status).toBe(404);
+		expect((await api('/api/stock-units/4294967295/repairs', { cookie: sessions.admin })).status).toBe(404);
 	});
 });
 

@@ -39,7 +39,7 @@ export async function makeOwnBooking(sessions: Sessions, options: { spareSpeaker
 	);
 	const today = new Date().toISOString().slice(0, 10);
 	const unit = async (modelType: string, modelId: number, serial: string) =>
-		must(await api('/api/units', { cookie: admin, method: 'POST', body: { serial, modelType, modelId, lastTestedAt: today, location: 'Bay 7' } }), 201, `unit ${serial}`);
+		must(await api('/api/stock-units', { cookie: admin, method: 'POST', body: { serial, modelType, modelId, lastTestedAt: today, location: 'Bay 7' } }), 201, `unit ${serial}`);
 	const speakers = [];
 	for (let i = 1; i <= 2 + (options.spareSpeakers ?? 1); i++) speakers.push(await unit('loudspeaker', speaker.id, `OB-${tag}-${i}`));
 	const amps = [await unit('amplifier', amp.id, `OBA-${tag}-1`)];

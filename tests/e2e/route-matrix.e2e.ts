@@ -96,12 +96,12 @@ const TABLE: Record<string, Row> = {
 	'DELETE /api/packages/[id=id]':              { out: S, admin: 'ok', warehouse: 'ok', sales: D, client: D, stranger: D, fresh: 'package' },
 	'GET /api/packages/[id=id]/history':         { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
 
-	'GET /api/units':                            { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
-	'POST /api/units':                           { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
-	'GET /api/units/[id=id]':                    { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
-	'PATCH /api/units/[id=id]':                  { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
-	'DELETE /api/units/[id=id]':                 { out: S, admin: 'ok', warehouse: 'ok', sales: D, client: D, stranger: D, fresh: 'unit' },
-	'GET /api/units/[id=id]/history':            { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'GET /api/stock-units':                      { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'POST /api/stock-units':                     { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	'GET /api/stock-units/[id=id]':              { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'PATCH /api/stock-units/[id=id]':            { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	'DELETE /api/stock-units/[id=id]':           { out: S, admin: 'ok', warehouse: 'ok', sales: D, client: D, stranger: D, fresh: 'unit' },
+	'GET /api/stock-units/[id=id]/history':      { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
 
 	'GET /api/quotes':                           { out: S, admin: 'ok', warehouse: D, sales: 'ok', client: 'ok', stranger: 'ok' }, // a client lists only their own
 	'POST /api/quotes':                          { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
@@ -125,8 +125,8 @@ const TABLE: Record<string, Row> = {
 	'GET /api/bookings/[id=id]':                 { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: 'ok', stranger: 'missing' }, // the client sees the state only
 	'POST /api/bookings/[id=id]/dispatch':       { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
 	'POST /api/bookings/[id=id]/return':         { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
-	'GET /api/units/[id=id]/repairs':            { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
-	'POST /api/units/[id=id]/repairs':           { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
+	'GET /api/stock-units/[id=id]/repairs':      { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'POST /api/stock-units/[id=id]/repairs':     { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
 	'GET /api/availability':                     { out: S, admin: 422, warehouse: 422, sales: 422, client: D, stranger: D }, // from and to are required
 	'GET /api/damage-reports/[id=id]/photo':     { out: S, admin: 'allowed', warehouse: 'allowed', sales: 'allowed', client: D, stranger: D }, // 404 unless that report has a photo
 
@@ -255,7 +255,7 @@ const TABLE: Record<string, Row> = {
 	'action /quotes/[id=id]?/cancel':            { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' },
 	'action /quotes/[id=id]?/close':             { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' },
 	'action /quotes/[id=id]?/promote':           { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D, quote: 'cancelled' }, // the form names no package: 422
-	'action /quotes/[id=id]?/balance':           { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' }
+	'action /quotes/[id=id]?/balanceInvoice':    { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' }
 };
 
 /** Well-formed (so it reaches the lookup) but issued to nobody. */
@@ -274,6 +274,7 @@ function idFor(collection: string, row: Row): number {
 		amplifiers: ids.ampId,
 		packages: ids.packageId,
 		units: ids.unitId,
+		'stock-units': ids.unitId,
 		attachments: ids.attachmentId,
 		bookings: ids.bookingId,
 		'damage-reports': ids.unitId,

@@ -7,7 +7,7 @@ import { Booking, BookingLine, Quote, StockUnit } from '../../src/lib/server/db/
 import { BOOKINGS, CATALOGUE, invalidate } from '../../src/lib/server/cache';
 import { createQuote } from '../../src/lib/server/services/quotes';
 import type { SessionUser } from '../../src/lib/server/users';
-import { makeClientUser, makeStaffUser, makeStockedPackage } from './inventory';
+import { makeContactUser, makeStaffUser, makeStockedPackage } from './inventory';
 
 export const today = () => new Date().toISOString().slice(0, 10);
 
@@ -38,7 +38,7 @@ export async function makeBooking(options: { cabinets?: number; units?: number; 
 	await StockUnit.update({ lastTestedAt: tested }, { where: { loudspeakerModelId: stock.loudspeaker.id } });
 	await StockUnit.update({ lastTestedAt: tested }, { where: { amplifierModelId: stock.amplifier.id } });
 	const warehouse = await makeStaffUser('admin');
-	const { client, user: clientUser } = await makeClientUser();
+	const { client, user: contactUser } = await makeContactUser();
 	const dates = options.startDate && options.endDate ? { startDate: options.startDate, endDate: options.endDate } : farDates();
 	const quote = await confirmedQuote(client.id, `Out and back ${stock.tag}`, stock.pkg.id, dates, warehouse);
 	const booking = await Booking.create({ quoteId: quote.id, status: 'confirmed', ...dates });
@@ -50,7 +50,7 @@ export async function makeBooking(options: { cabinets?: number; units?: number; 
 	invalidate(CATALOGUE);
 	const units = await StockUnit.findAll({ where: { loudspeakerModelId: stock.loudspeaker.id }, order: [['serial', 'ASC']] });
 	const amps = await StockUnit.findAll({ where: { amplifierModelId: stock.amplifier.id }, order: [['serial', 'ASC']] });
-	return { stock, booking, quote, warehouse, client, clientUser, dates, serials: units.map((u) => u.serial), ampSerials: amps.map((u) => u.serial), units, amps };
+	return { stock, booking, quote, warehouse, client, contactUser, dates, serials: units.map((u) => u.serial), ampSerials: amps.map((u) => u.serial), units, amps };
 }
 
 /** Another confirmed booking for the same models (bypassing the reservation check, as a race needs). */

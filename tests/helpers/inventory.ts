@@ -39,7 +39,7 @@ export async function makeStockedPackage(options: { cabinets?: number; units?: n
 	return { loudspeaker, amplifier, pkg, tag };
 }
 
-export async function makeClientUser(): Promise<{ client: Client; user: SessionUser }> {
+export async function makeContactUser(): Promise<{ client: Client; user: SessionUser }> {
 	const tag = randomUUID().slice(0, 8);
 	const client = await Client.create({ name: `Organiser ${tag}`, contactName: 'Pat Test', email: `org-${tag}@example.test` });
 	const row = await User.create({ email: `org-${tag}@example.test`, name: 'Pat Test', role: 'client', clientId: client.id, passwordHash: await hashPassword('x-password-123') });

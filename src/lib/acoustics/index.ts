@@ -127,6 +127,6 @@ export { compareOutcomes } from './receivers';
 export { DEFAULT_LISTENING_HEIGHT_M } from './site';
 export { DEFAULT_GROUP_HEIGHT_M } from './groups';
 export { levelAtDistance, levelCurve, type LevelPoint, type WeightedLevels } from './curve';
-export { feetToMetres, metresToFeet, speedOfSound, METRES_PER_FOOT } from './units';
+export { feetToMetres, fromMetres, metresToFeet, speedOfSound, toMetres, METRES_PER_FOOT, type DistanceUnit } from './units';
 export { MODEL_ASSUMPTIONS } from './assumptions';
 export { AcousticsInputError } from './errors';

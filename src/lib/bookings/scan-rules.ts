@@ -2,14 +2,14 @@
  * What a scanned serial must satisfy before it goes out on a booking or comes back from it. Pure:
  * the service gathers the facts under row locks, these functions give the refusal in plain words.
  */
-import type { UnitStatus } from '$lib/schemas/inventory-units';
+import type { StockUnitStatus } from '$lib/schemas/inventory-units';
 import { canDispatch, canReturn, type BookingState } from './states';
 import type { TestStatus } from './safety-tests';
 
 export interface DispatchFacts {
 	bookingState: BookingState;
 	serial: string;
-	unit: { status: UnitStatus; modelName: string } | null;
+	unit: { status: StockUnitStatus; modelName: string } | null;
 	/** The booking's line for the unit's model, or null when the booking has no such model. */
 	line: { needed: number; dispatched: number } | null;
 	/** Already scanned out on this booking and not back. */

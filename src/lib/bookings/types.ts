@@ -1,10 +1,11 @@
 /** What the warehouse pages and the API show of a booking and its pick list. */
 import type { BookingState } from './states';
+import type { ModelType } from '../inventory/types';
 
 export type UnitOnBooking = { id: number; serial: string; location: string; on: 'reserved' | 'out' | 'back' };
 
 export interface PickLine {
-	modelType: 'loudspeaker' | 'amplifier';
+	modelType: ModelType;
 	modelId: number;
 	name: string;
 	quantity: number;

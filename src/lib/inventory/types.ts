@@ -1,7 +1,7 @@
 import type { DirectivityTable } from '$lib/schemas/directivity';
 import type { AmplifierInput } from '$lib/schemas/inventory-amplifiers';
 import type { LoudspeakerInput } from '$lib/schemas/inventory-loudspeakers';
-import type { UnitStatus } from '$lib/schemas/inventory-units';
+import type { StockUnitStatus } from '$lib/schemas/inventory-units';
 
 /** Plain rows as the inventory services return them (dates as ISO strings). */
 interface Stamped {
@@ -42,18 +42,21 @@ export type LoadedPackage = Omit<PackageRow, 'groups'> & { groups: LoadedGroup[]
 
 export interface StockUnitRow extends Stamped {
 	serial: string;
-	modelType: 'loudspeaker' | 'amplifier';
+	modelType: ModelType;
 	modelId: number;
 	modelName: string;
-	status: UnitStatus;
+	status: StockUnitStatus;
 	location: string;
 	lastTestedAt: string | null;
 	notes: string;
 }
 
-export type HistoryModelType = 'loudspeaker' | 'amplifier' | 'package' | 'unit';
+/** Which kind of model a stock unit, booking line or attachment belongs to. */
+export type ModelType = 'loudspeaker' | 'amplifier';
 
-export interface SpecChangeRow {
+export type HistoryModelType = ModelType | 'package' | 'unit';
+
+export interface HistoryEntryRow {
 	id: number;
 	field: string;
 	oldValue: string | null;
@@ -65,7 +68,7 @@ export interface SpecChangeRow {
 
 export interface AttachmentRow {
 	id: number;
-	modelType: 'loudspeaker' | 'amplifier';
+	modelType: ModelType;
 	modelId: number;
 	kind: 'spec-sheet' | 'photo';
 	originalName: string;

@@ -3,8 +3,9 @@
  * by confirmed bookings whose dates overlap, against what a package needs.
  */
 import { datesOverlap } from './hire-days';
+import type { ModelType } from '../inventory/types';
 
-export type ModelKey = `${'loudspeaker' | 'amplifier'}:${number}`;
+export type ModelKey = `${ModelType}:${number}`;
 
 export interface Reservation {
 	startDate: string;

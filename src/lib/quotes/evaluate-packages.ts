@@ -11,17 +11,19 @@ import {
 	type LimitsResult,
 	type Outcome,
 	type QuoteRequest,
-	type ReceiverResult
+	type ReceiverResult,
+	type Verdict
 } from '../acoustics';
 import { packageBillOfMaterials, toPackageSpec, type BillOfMaterials, type LoadedPackage } from '../inventory';
 import { checkAvailability, type ModelKey, type Reservation } from './availability';
 import { LIMITED_BY_LABELS } from './limits';
 import { priceHire, type Price, type PriceLineInput, type PriceSettings } from './pricing';
-import { rank, effectiveOutcome, effectiveVerdict, type Verdict } from './ranking';
+import { rank, effectiveOutcome, effectiveVerdict } from './ranking';
 import { chartDistances } from './request';
+import type { ModelType } from '../inventory/types';
 
 export interface ShortfallLine {
-	modelType: 'loudspeaker' | 'amplifier';
+	modelType: ModelType;
 	modelId: number;
 	name: string;
 	needed: number;
@@ -99,7 +101,7 @@ export function evaluateOne(pkg: LoadedPackage, ctx: EvaluationContext): Package
 	]);
 	const stock = checkAvailability(neededUnits(bom), ctx.inService, ctx.reservations, ctx.startDate, ctx.endDate);
 	const shortfalls = stock.shortfalls.map((s) => {
-		const [modelType, id] = s.model.split(':') as ['loudspeaker' | 'amplifier', string];
+		const [modelType, id] = s.model.split(':') as [ModelType, string];
 		return { modelType, modelId: Number(id), name: names.get(s.model) ?? s.model, needed: s.needed, available: s.available, missing: s.missing };
 	});
 	const price = priceHire(priceLinesFor(pkg, bom), ctx.startDate, ctx.endDate, ctx.priceSettings);

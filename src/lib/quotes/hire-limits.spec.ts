@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { evaluationRequestSchema } from '../schemas/evaluation';
+import { quoteRequestSchema } from '../schemas/evaluation';
 import { MAX_CHARGE_MINOR, MAX_HIRE_DAYS, chargeTooLarge, localIsoDate } from './hire-limits';
 
 const request = (startDate: string, endDate: string) => ({
 	targetDb: 90, weighting: 'A', distance: 20, distanceUnit: 'm', programme: 'speech', startDate, endDate
 });
 const issuesOf = (startDate: string, endDate: string) => {
-	const parsed = evaluationRequestSchema.safeParse(request(startDate, endDate));
+	const parsed = quoteRequestSchema.safeParse(request(startDate, endDate));
 	return parsed.success ? {} : Object.fromEntries(parsed.error.issues.map((i) => [i.path.join('.'), i.message]));
 };
 

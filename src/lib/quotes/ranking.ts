@@ -2,10 +2,9 @@
  * Orders evaluated packages for the desk: clear → tight → over the limit → short (contract step 9),
  * then cheapest first.
  */
-import { OUTCOME_ORDER, type Outcome } from '../acoustics';
+import { OUTCOME_ORDER, type Outcome, type Verdict } from '../acoustics';
 
 export type { Outcome };
-export type Verdict = 'clear' | 'tight' | 'short';
 
 export interface Rankable {
 	outcome: Outcome;

@@ -1,20 +1,18 @@
 /** Small rules of the desk's request form, kept pure so they are tested without a browser. */
+import { fromMetres, toMetres, type DistanceUnit } from '../acoustics/units';
 import type { PackageResult } from './evaluate-packages';
 
-/** The international foot, exactly (1959 agreement): 0.3048 m. */
-const FOOT_M = 0.3048;
 
 type Distances = { distance: number; audienceWidth: number | null; boundaryDistance: number | null };
 
-function convert(value: number, from: 'm' | 'ft', to: 'm' | 'ft'): number {
+function convert(value: number, from: DistanceUnit, to: DistanceUnit): number {
 	if (from === to) return value;
-	const metres = from === 'ft' ? value * FOOT_M : value;
-	const result = to === 'ft' ? metres / FOOT_M : metres;
+	const result = fromMetres(toMetres(value, from), to);
 	return Math.round(result * 10) / 10;
 }
 
 /** Every distance of the request in the new unit, so switching m ↔ ft keeps the same place. */
-export function convertDistances<T extends Distances>(form: T, from: 'm' | 'ft', to: 'm' | 'ft'): Distances {
+export function convertDistances<T extends Distances>(form: T, from: DistanceUnit, to: DistanceUnit): Distances {
 	const maybe = (v: number | null) => (v === null || !Number.isFinite(v) ? v : convert(v, from, to));
 	return { distance: convert(form.distance, from, to), audienceWidth: maybe(form.audienceWidth), boundaryDistance: maybe(form.boundaryDistance) };
 }

@@ -1,6 +1,7 @@
 /** Turns the desk's request (units as entered) into the acoustic model's QuoteRequest (metres). */
 import type { Programme, QuoteRequest } from '../acoustics';
-import { toMetres, type QuoteRequestInput } from '../schemas/evaluation';
+import { toMetres } from '../acoustics/units';
+import type { QuoteRequestInput } from '../schemas/evaluation';
 import type { InlineSiteInput } from '../schemas/sites';
 import { toModelSite } from '../sites/model-site';
 

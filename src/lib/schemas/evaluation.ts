@@ -1,10 +1,8 @@
 import { z } from 'zod';
 import { hireDays, parseIsoDate } from '../quotes/hire-days';
 import { MAX_HIRE_DAYS, localIsoDate } from '../quotes/hire-limits';
+import { toMetres } from '../acoustics/units';
 import { inlineSiteSchema } from './sites';
-
-const FT = 0.3048;
-const toMetres = (value: number, unit: 'm' | 'ft') => (unit === 'ft' ? value * FT : value);
 
 const weighting = z.enum(['A', 'C', 'Z'], { error: 'Choose A, C or Z weighting' });
 const isoDate = z.string().refine((v) => parseIsoDate(v) !== null, 'A date as YYYY-MM-DD');
@@ -19,7 +17,7 @@ const finite = (min: number, max: number, what: string) =>
  * ranges are those of the methods used (ISO 9613-1 air absorption holds for −20…50 °C and
  * 10…100 % relative humidity) and of outdoor live sound.
  */
-export const evaluationRequestSchema = z
+export const quoteRequestSchema = z
 	.object({
 		targetDb: finite(40, 140, 'the target level (dB)'),
 		weighting,
@@ -67,6 +65,5 @@ export const evaluationRequestSchema = z
 			ctx.addIssue({ code: 'custom', path: ['startDate'], message: 'The hire cannot start in the past' });
 		}
 	});
-export type QuoteRequestInput = z.infer<typeof evaluationRequestSchema>;
+export type QuoteRequestInput = z.infer<typeof quoteRequestSchema>;
 
-export { toMetres };

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { QUOTE_ACTIONS } from '../quotes/states';
-import { evaluationRequestSchema, type QuoteRequestInput } from './evaluation';
+import { quoteRequestSchema, type QuoteRequestInput } from './evaluation';
 import { systemSchema } from './systems';
 
 export const newClientSchema = z.object({
@@ -20,7 +20,7 @@ const quoteFields = {
 	/** A system composed or suggested for this quote, instead of a package. */
 	system: systemSchema.optional(),
 	notes: z.string().trim().max(4000).optional(),
-	request: evaluationRequestSchema
+	request: quoteRequestSchema
 };
 
 /** API body for a new quote: an existing client by id, or a new one. */
@@ -56,7 +56,7 @@ export type QuoteActionInput = z.infer<typeof quoteActionSchema>;
 
 const optionalNumber = z.number().nullable().default(null);
 
-export const requestFormSchema = z.object({
+export const quoteRequestFormSchema = z.object({
 	clientId: z.number().int().positive().nullable().default(null),
 	newClientName: z.string().trim().max(160).default(''),
 	newClientContact: z.string().trim().max(120).default(''),
@@ -83,10 +83,10 @@ export const requestFormSchema = z.object({
 	/** A chosen suggested or composed system, as JSON of its groups ('' when a package is chosen). */
 	system: z.string().max(4000).default('')
 });
-export type RequestForm = z.infer<typeof requestFormSchema>;
+export type QuoteRequestForm = z.infer<typeof quoteRequestFormSchema>;
 
 /** The evaluation body the form describes (not yet validated). */
-export function evaluationBodyFromForm(f: RequestForm): Record<string, unknown> {
+export function evaluationBodyFromForm(f: QuoteRequestForm): Record<string, unknown> {
 	return {
 		targetDb: f.targetDb,
 		weighting: f.weighting,
@@ -107,8 +107,8 @@ export function evaluationBodyFromForm(f: RequestForm): Record<string, unknown> 
 }
 
 /** Where an API error path lands in the flat form. */
-export function formFieldOf(path: string): keyof RequestForm | null {
-	const map: Record<string, keyof RequestForm> = {
+export function formFieldOf(path: string): keyof QuoteRequestForm | null {
+	const map: Record<string, keyof QuoteRequestForm> = {
 		'boundary.distance': 'boundaryDistance',
 		'boundary.limitDb': 'boundaryLimitDb',
 		'boundary.weighting': 'boundaryWeighting',
@@ -120,7 +120,7 @@ export function formFieldOf(path: string): keyof RequestForm | null {
 	};
 	if (map[path]) return map[path];
 	const last = path.replace(/^request\./, '');
-	return last in requestFormSchema.shape ? (last as keyof RequestForm) : null;
+	return last in quoteRequestFormSchema.shape ? (last as keyof QuoteRequestForm) : null;
 }
 
 /** The hidden system field back into groups; anything unreadable is left for the schema to refuse. */
@@ -133,7 +133,7 @@ function parseSystem(text: string): unknown {
 }
 
 /** The request form as a quote body for the API (validated by quoteCreateSchema). */
-export function quoteBodyFromForm(f: RequestForm): Record<string, unknown> {
+export function quoteBodyFromForm(f: QuoteRequestForm): Record<string, unknown> {
 	return {
 		...(f.clientId !== null
 			? { clientId: f.clientId }
@@ -146,7 +146,7 @@ export function quoteBodyFromForm(f: RequestForm): Record<string, unknown> {
 }
 
 /** A saved request back into the form, for revising a quote. */
-export function formFromRequest(request: QuoteRequestInput): Partial<RequestForm> {
+export function formFromRequest(request: QuoteRequestInput): Partial<QuoteRequestForm> {
 	return {
 		targetDb: request.targetDb,
 		weighting: request.weighting,

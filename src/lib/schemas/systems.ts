@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { evaluationRequestSchema } from './evaluation';
+import { quoteRequestSchema } from './evaluation';
 import { checkGroupsFit, packageFields, packageGroupSchema } from './inventory-packages';
 
 /**
@@ -32,4 +32,4 @@ export type PromoteInput = z.output<typeof promoteSchema>;
  * POST /api/evaluations: the request, and optionally a system composed on the desk; with one, only
  * that system is evaluated (and priced) instead of every package.
  */
-export const evaluationWithSystemSchema = z.intersection(evaluationRequestSchema, z.object({ system: systemSchema.optional() }));
+export const quoteRequestWithSystemSchema = z.intersection(quoteRequestSchema, z.object({ system: systemSchema.optional() }));

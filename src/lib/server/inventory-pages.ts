@@ -5,8 +5,8 @@ import { deleteAttachment, listAttachments, saveAttachment } from './services/in
 import { listHistory } from './services/inventory-history';
 import { MAX_CSV_BYTES, type CsvKind } from './services/inventory-csv';
 import { amplifiers, loudspeakers } from './services/inventory-resources';
+import type { ModelType } from '$lib/inventory/types';
 
-type ModelType = 'loudspeaker' | 'amplifier';
 
 /**
  * Puts a service's refusal on the form: each field error beside its field (service keys such as

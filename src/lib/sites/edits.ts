@@ -5,16 +5,17 @@
  */
 import type { Receiver, Site } from '../acoustics';
 import { bearingOf, distanceOf, normaliseBearing, pointOnBearing, roundTo, type PlanPoint } from './geometry';
-import { fromDisplayLength, toDisplayLength, type PlanUnits } from './units';
+import type { DistanceUnit } from '../acoustics/units';
+import { fromDisplayLength, toDisplayLength } from './units';
 
 /** The position is never closer than this to the system (the model takes anything nearer as 1 m). */
 export const MIN_POSITION_M = 1;
 
-export function snapLength(metres: number, units: PlanUnits): number {
+export function snapLength(metres: number, units: DistanceUnit): number {
 	return fromDisplayLength(roundTo(toDisplayLength(metres, units), 0.1), units);
 }
 
-export function snapPoint(point: PlanPoint, units: PlanUnits): PlanPoint {
+export function snapPoint(point: PlanPoint, units: DistanceUnit): PlanPoint {
 	return { x: snapLength(point.x, units), y: snapLength(point.y, units) };
 }
 
@@ -39,12 +40,12 @@ export function updateReceiver(site: Site, index: number, patch: Partial<Receive
 	return { ...site, receivers: site.receivers.map((r, i) => (i === index ? { ...r, ...patch } : r)) };
 }
 
-export function moveReceiver(site: Site, index: number, point: PlanPoint, units: PlanUnits): Site {
+export function moveReceiver(site: Site, index: number, point: PlanPoint, units: DistanceUnit): Site {
 	return updateReceiver(site, index, snapPoint(point, units));
 }
 
 /** Moves a receiver by a step in display units (keyboard). */
-export function nudgeReceiver(site: Site, index: number, dx: number, dy: number, units: PlanUnits): Site {
+export function nudgeReceiver(site: Site, index: number, dx: number, dy: number, units: DistanceUnit): Site {
 	const r = site.receivers[index];
 	if (!r) return site;
 	const point = { x: r.x + fromDisplayLength(dx, units), y: r.y + fromDisplayLength(dy, units) };
@@ -75,14 +76,14 @@ export function addReceiver(
 	site: Site,
 	positionM: number,
 	limit: { limitDb: number; weighting: Receiver['weighting'] },
-	units: PlanUnits
+	units: DistanceUnit
 ): Site {
 	const point = snapPoint(pointOnBearing(site.aimDeg, Math.max(2 * positionM, 20)), units);
 	return { ...site, receivers: [...site.receivers, { name: nextReceiverName(site), ...point, ...limit }] };
 }
 
 /** Aim and position distance from a point the desk dragged the position to. */
-export function aimAndDistanceFrom(point: PlanPoint, units: PlanUnits): { aimDeg: number; distanceM: number } {
+export function aimAndDistanceFrom(point: PlanPoint, units: DistanceUnit): { aimDeg: number; distanceM: number } {
 	return {
 		aimDeg: normaliseBearing(Math.round(bearingOf(point))),
 		distanceM: Math.max(MIN_POSITION_M, snapLength(distanceOf(point), units))
@@ -94,7 +95,7 @@ export function nudgePosition(
 	aimDeg: number,
 	distanceM: number,
 	event: { key: string; shiftKey: boolean },
-	units: PlanUnits
+	units: DistanceUnit
 ): { aimDeg: number; distanceM: number } | null {
 	const step = arrowStep(event);
 	if (!step) return null;

@@ -5,6 +5,7 @@
  */
 import { channelPlanErrors, channelsNeeded, type AmplifierModelRow, type LoadedGroup, type LoudspeakerModelRow } from '../inventory';
 import type { ModelKey } from '../quotes/availability';
+import type { ModelType } from '../inventory/types';
 
 export interface StockCatalogue {
 	loudspeakers: LoudspeakerModelRow[];
@@ -29,7 +30,7 @@ export interface Chain {
 // Common practice: ground-stacked subwoofers ~0.6 m, tops on stands ~2.5 m, flown hangs ~7 m.
 const HEIGHT_M = { subwoofer: 0.6, 'full-range': 2.5, 'line-array-element': 7 } as const;
 
-export function freeUnits(catalogue: StockCatalogue, type: 'loudspeaker' | 'amplifier', id: number): number {
+export function freeUnits(catalogue: StockCatalogue, type: ModelType, id: number): number {
 	return Math.max(0, catalogue.available[`${type}:${id}`] ?? 0);
 }
 

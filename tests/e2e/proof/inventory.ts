@@ -16,7 +16,7 @@ export const ROW_URL: Record<ThrowawayKind, string> = {
 	loudspeaker: '/api/loudspeakers',
 	amplifier: '/api/amplifiers',
 	package: '/api/packages',
-	unit: '/api/units',
+	unit: '/api/stock-units',
 	attachment: '/api/attachments',
 	site: '/api/sites'
 };
@@ -116,7 +116,7 @@ export async function makeThrowaway(
 			);
 		case 'unit':
 			return created(
-				post('/api/units', {
+				post('/api/stock-units', {
 					serial: `PROOF-${tag()}`,
 					modelType: 'loudspeaker',
 					modelId: base.speakerId

@@ -10,8 +10,8 @@
  */
 import { BASE_URL } from '../browser';
 
-export type Verdict = 'ok' | 'denied' | 'signin' | 'missing' | 'allowed';
-export type Expected = Verdict | number;
+export type AccessOutcome = 'ok' | 'denied' | 'signin' | 'missing' | 'allowed';
+export type Expected = AccessOutcome | number;
 
 export interface Observed {
 	status: number;

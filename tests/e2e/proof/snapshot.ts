@@ -9,7 +9,7 @@ export const SNAPSHOT_LISTS = [
 	'/api/loudspeakers',
 	'/api/amplifiers',
 	'/api/packages',
-	'/api/units',
+	'/api/stock-units',
 	'/api/users',
 	'/api/quotes',
 	'/api/sites'

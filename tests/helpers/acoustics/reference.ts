@@ -16,7 +16,8 @@ import type {
 	PackageSpec,
 	QuoteRequest,
 	Receiver,
-	Site
+	Site,
+	Weighting
 } from '../../../src/lib/acoustics/types';
 
 export const CENTRES = [31.5, 63, 125, 250, 500, 1000, 2000, 4000, 8000] as const;
@@ -164,7 +165,7 @@ const airArb = fc.record({
 	temperatureC: fc.double({ min: -10, max: 40, noNaN: true }),
 	humidityPct: fc.double({ min: 10, max: 100, noNaN: true })
 });
-const weightingArb = fc.constantFrom<'A' | 'C' | 'Z'>('A', 'C', 'Z');
+const weightingArb = fc.constantFrom<Weighting>('A', 'C', 'Z');
 export const requestArb: fc.Arbitrary<QuoteRequest> = fc.record({
 	targetDb: fc.double({ min: 60, max: 130, noNaN: true }),
 	weighting: weightingArb,

@@ -2,13 +2,9 @@
  * Layout and words for the level-versus-distance chart that are plain arithmetic: where the boundary's
  * marks and labels go, and the chart's text alternative. Pure, so it is tested without a DOM.
  */
-import {
-	formatDistance,
-	formatLevel,
-	isDrawable,
-	type DistanceUnit,
-	type Weighting
-} from './scales';
+import type { Weighting } from '../../acoustics/types';
+import type { DistanceUnit } from '../../acoustics/units';
+import { formatDistance, formatLevel, isDrawable } from './scales';
 
 export interface CurvePoint {
 	distanceM: number;

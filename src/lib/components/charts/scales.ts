@@ -5,12 +5,10 @@
  */
 import { scaleLinear, scaleLog } from 'd3-scale';
 import { line } from 'd3-shape';
+import type { Weighting } from '../../acoustics/types';
+import { fromMetres, toMetres, type DistanceUnit } from '../../acoustics/units';
 
-export type Weighting = 'A' | 'C' | 'Z';
-export type DistanceUnit = 'm' | 'ft';
 export type BandVerdict = 'clear' | 'tight' | 'short' | 'not-covered';
-
-export const METRES_PER_FOOT = 0.3048;
 
 /** A true number that can be drawn: JSON turns −Infinity into null, and either means "nothing here". */
 export function isDrawable(value: number | null | undefined): value is number {
@@ -158,11 +156,11 @@ export function formatBandHz(hz: number): string {
 }
 
 export function toDisplayDistance(metres: number, unit: DistanceUnit): number {
-	return unit === 'ft' ? metres / METRES_PER_FOOT : metres;
+	return fromMetres(metres, unit);
 }
 
 export function fromDisplayDistance(value: number, unit: DistanceUnit): number {
-	return unit === 'ft' ? value * METRES_PER_FOOT : value;
+	return toMetres(value, unit);
 }
 
 /** A distance in the display unit without the unit: "30", "98", "2.5" (one decimal below 10). */

@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { uniqueEmail, useTestDatabase } from '../../../../tests/helpers/db';
 import { Client, SignInLink, User } from '../db/models';
-import { clientAccountFor, consumeSignInLink, createSignInLink, peekSignInLink } from './sign-in-links';
+import { contactAccountFor, consumeSignInLink, createSignInLink, peekSignInLink } from './sign-in-links';
 
 useTestDatabase();
 
@@ -14,14 +14,14 @@ async function newClient() {
 describe('sign-in links', () => {
 	it('makes one client account per organisation, with a password nobody knows', async () => {
 		const client = await newClient();
-		const first = await clientAccountFor(client);
-		const second = await clientAccountFor(client);
+		const first = await contactAccountFor(client);
+		const second = await contactAccountFor(client);
 		expect(second.id).toBe(first.id);
 		expect(first).toMatchObject({ role: 'client', clientId: client.id, email: client.email });
 	});
 
 	it('stores only a hash, works once, and keeps only same-site redirects', async () => {
-		const user = await clientAccountFor(await newClient());
+		const user = await contactAccountFor(await newClient());
 		const token = await createSignInLink(user.id, 'https://evil.example/steal');
 		const row = await SignInLink.findOne({ where: { userId: user.id } });
 		expect(row!.tokenHash).toBe(createHash('sha256').update(token).digest('hex'));
@@ -33,7 +33,7 @@ describe('sign-in links', () => {
 	});
 
 	it('refuses expired links, unknown tokens and deactivated accounts', async () => {
-		const user = await clientAccountFor(await newClient());
+		const user = await contactAccountFor(await newClient());
 		const expired = await createSignInLink(user.id, '/quotes/1');
 		await SignInLink.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { userId: user.id } });
 		expect(await consumeSignInLink(expired)).toBeNull();
@@ -53,11 +53,11 @@ describe('sign-in links', () => {
 	it('never hands a staff account to a client organisation that shares its e-mail', async () => {
 		const staff = await User.create({ email: uniqueEmail('desk'), name: 'Desk Person', role: 'sales', passwordHash: 'x' });
 		const client = await Client.create({ name: 'Borrowed', contactName: 'Someone', email: staff.email });
-		await expect(clientAccountFor(client)).rejects.toMatchObject({ status: 422 });
+		await expect(contactAccountFor(client)).rejects.toMatchObject({ status: 422 });
 	});
 
 	it('an older link stops working when a new one is issued', async () => {
-		const user = await clientAccountFor(await newClient());
+		const user = await contactAccountFor(await newClient());
 		const older = await createSignInLink(user.id, '/quotes/1');
 		const newer = await createSignInLink(user.id, '/quotes/2');
 		expect(await peekSignInLink(older)).toBeNull();

@@ -21,7 +21,7 @@ export const STAFF_EMAIL_REFUSED = 'This e-mail belongs to a staff account; the 
  * An e-mail that already signs in a staff member (or another organisation) is refused: the link
  * mailed with a quote must never open someone else's account.
  */
-export async function clientAccountFor(client: { id: number; email: string; contactName: string }, transaction?: Transaction): Promise<User> {
+export async function contactAccountFor(client: { id: number; email: string; contactName: string }, transaction?: Transaction): Promise<User> {
 	const existing = await User.findOne({ where: { clientId: client.id, role: 'client', active: true }, order: [['id', 'ASC']], transaction });
 	if (existing) return existing;
 	const [user] = await User.findOrCreate({

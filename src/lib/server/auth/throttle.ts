@@ -8,7 +8,7 @@ import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
 const perNetworkAddress = new RateLimiterMemory({ keyPrefix: 'link-ip', points: 30, duration: 15 * 60 });
 const perEmailAddress = new RateLimiterMemory({ keyPrefix: 'link-email', points: 3, duration: 60 * 60 });
 
-export type ThrottleVerdict = { ok: true } | { ok: false; who: 'network' | 'email'; retryAfterS: number };
+export type ThrottleDecision = { ok: true } | { ok: false; who: 'network' | 'email'; retryAfterS: number };
 
 async function take(limiter: RateLimiterMemory, key: string): Promise<number | null> {
 	try {
@@ -21,7 +21,7 @@ async function take(limiter: RateLimiterMemory, key: string): Promise<number | n
 }
 
 /** Counts one request; the network address is checked first so a flood never touches the per-e-mail count. */
-export async function throttleLinkRequest(networkAddress: string, email: string): Promise<ThrottleVerdict> {
+export async function throttleLinkRequest(networkAddress: string, email: string): Promise<ThrottleDecision> {
 	const network = await take(perNetworkAddress, networkAddress);
 	if (network !== null) return { ok: false, who: 'network', retryAfterS: network };
 	const perEmail = await take(perEmailAddress, email.toLowerCase());

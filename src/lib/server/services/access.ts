@@ -5,7 +5,7 @@
 import { safeRedirectPath } from '$lib/safe-redirect';
 import { createSignInLink } from '../auth/sign-in-links';
 import { issuePasswordReset, RESET_VALID_MINUTES } from '../auth/password-resets';
-import { throttleLinkRequest, type ThrottleVerdict } from '../auth/throttle';
+import { throttleLinkRequest, type ThrottleDecision } from '../auth/throttle';
 import { User } from '../db';
 import { passwordResetEmail, signInLinkEmail } from '../mail/access-emails';
 import { sendEmail } from '../mail/outbox';
@@ -14,7 +14,7 @@ import { getSettings } from './settings';
 
 /** Only a flood from one network address is refused out loud (429); everything else looks the same. */
 async function throttled(networkAddress: string, email: string): Promise<boolean> {
-	const verdict: ThrottleVerdict = await throttleLinkRequest(networkAddress, email);
+	const verdict: ThrottleDecision = await throttleLinkRequest(networkAddress, email);
 	if (!verdict.ok && verdict.who === 'network') {
 		throw new DomainError(429, `Too many requests from here. Try again in ${Math.ceil(verdict.retryAfterS / 60)} minutes.`);
 	}

@@ -6,6 +6,7 @@ import type { ModelKey } from '$lib/quotes/availability';
 import { quoteReference } from '$lib/quotes/reference';
 import { AmplifierModel, Booking, BookingLine, BookingUnit, LoudspeakerModel, Quote, QuoteVersion, StockUnit } from '../db';
 import { DomainError } from './errors';
+import type { ModelType } from '$lib/inventory/types';
 
 export interface ModelCalendar {
 	model: ModelKey;
@@ -27,7 +28,7 @@ export async function calendarModels(): Promise<{ key: ModelKey; name: string }[
 }
 
 export async function modelCalendar(model: ModelKey, from: string, to: string, today: string): Promise<ModelCalendar> {
-	const [modelType, idText] = model.split(':') as ['loudspeaker' | 'amplifier', string];
+	const [modelType, idText] = model.split(':') as [ModelType, string];
 	const modelId = Number(idText);
 	const found = modelType === 'loudspeaker' ? await LoudspeakerModel.findByPk(modelId) : await AmplifierModel.findByPk(modelId);
 	if (!found) throw new DomainError(404, 'No such model.', { model: ['No such model.'] });

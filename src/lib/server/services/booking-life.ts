@@ -105,7 +105,7 @@ export async function deliveryNote(bookingId: number) {
 }
 
 /** A client's view of their hire: the state in plain words, nothing about serials or other hires. */
-export async function hireStateForClient(quoteId: number): Promise<{ state: BookingState; words: string; startDate: string; endDate: string } | null> {
+export async function bookingStateForClient(quoteId: number): Promise<{ state: BookingState; words: string; startDate: string; endDate: string } | null> {
 	const booking = await Booking.findOne({ where: { quoteId } });
 	if (!booking) return null;
 	const s = await bookingSummary(booking.id);

@@ -10,6 +10,7 @@ import { checkAvailability, type ModelKey, type Shortfall } from '$lib/quotes/av
 import { db, AmplifierModel, Booking, BookingLine, LoudspeakerModel, QuoteVersion } from '../db';
 import { bumpStamp } from '../cache-stamps';
 import { reservationsOverlapping, unitsInService } from './catalogue';
+import type { ModelType } from '$lib/inventory/types';
 
 export type Reservation =
 	| { ok: true; bookingId: number }
@@ -46,7 +47,7 @@ export async function reserveStockForQuote(quoteId: number, version: number, tra
 	await BookingLine.destroy({ where: { bookingId }, transaction });
 	await BookingLine.bulkCreate(
 		(Object.entries(needed) as [ModelKey, number][]).map(([key, quantity]) => {
-			const [modelType, modelId] = key.split(':') as ['loudspeaker' | 'amplifier', string];
+			const [modelType, modelId] = key.split(':') as [ModelType, string];
 			return { bookingId, modelType, modelId: Number(modelId), quantity };
 		}),
 		{ transaction }

@@ -26,7 +26,7 @@ export interface ClientDetail extends ClientSummary {
 	notes: string | null;
 	contacts: { id: number; name: string; email: string; active: boolean; lastSignInAt: string | null }[];
 	quotes: { id: number; reference: string; eventName: string; status: QuoteStatus; startDate: string; endDate: string }[];
-	hires: { id: number; quoteId: number; eventName: string; status: string; startDate: string; endDate: string }[];
+	bookings: { id: number; quoteId: number; eventName: string; status: string; startDate: string; endDate: string }[];
 	history: { field: string; oldValue: string | null; newValue: string | null; changedBy: string; at: string }[];
 }
 
@@ -71,7 +71,7 @@ export async function getClient(id: number): Promise<ClientDetail> {
 			const current = (q as Quote & { versions: QuoteVersion[] }).versions.find((v) => v.version === q.currentVersion)!;
 			return { id: q.id, reference: quoteReference(q.id), eventName: q.eventName, status: q.status, startDate: current.startDate, endDate: current.endDate };
 		}),
-		hires: bookings.map((b) => ({ id: b.id, quoteId: b.quoteId, eventName: eventOf.get(b.quoteId) ?? '', status: b.status, startDate: b.startDate, endDate: b.endDate })),
+		bookings: bookings.map((b) => ({ id: b.id, quoteId: b.quoteId, eventName: eventOf.get(b.quoteId) ?? '', status: b.status, startDate: b.startDate, endDate: b.endDate })),
 		history: history.map((h) => ({ field: h.field, oldValue: h.oldValue, newValue: h.newValue, changedBy: editorName.get(h.changedById) ?? 'someone', at: h.createdAt.toISOString() }))
 	};
 }

@@ -14,7 +14,7 @@ import { recentDeskNotices, type DeskNoticeRow } from './desk-notices';
 export interface Overview {
 	attention: { id: number; reference: string; eventName: string; why: string }[];
 	quotes: QuoteSummary[];
-	goingOut: BookingSummary[];
+	bookingsThisWeek: BookingSummary[];
 	unitsInRepair: number | null;
 	/** Units not back after their hire ended (staff only). */
 	late: LateUnit[];
@@ -58,7 +58,7 @@ export async function overviewFor(user: SessionUser): Promise<Overview> {
 		})),
 		notices,
 		quotes,
-		goingOut: bookings,
+		bookingsThisWeek: bookings,
 		unitsInRepair: inRepair,
 		late,
 		tests: due && { overdue: due.filter((d) => d.status === 'overdue').length, dueSoon: due.filter((d) => d.status === 'due-soon').length }

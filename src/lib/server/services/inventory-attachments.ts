@@ -5,8 +5,8 @@ import { deleteStoredFiles, getStoredFile, putStoredFile } from '../storage/stor
 import { DomainError } from './errors';
 import { plainRow, specModelExists, withTransaction } from './inventory-common';
 import { extensionFor, safeOriginalName, sniffMimeType, uploadProblem, type AttachmentKind } from './upload-checks';
+import type { ModelType } from '$lib/inventory/types';
 
-type ModelType = 'loudspeaker' | 'amplifier';
 
 function toRow(a: ModelAttachment): AttachmentRow {
 	const { storedName: _stored, ...row } = plainRow<AttachmentRow & { storedName: string }>(a);

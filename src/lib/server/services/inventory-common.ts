@@ -4,6 +4,7 @@ import { fieldErrors } from '../http';
 import { AmplifierModel, LoudspeakerModel } from '../db/models';
 import { bumpStamp } from '../cache-stamps';
 import { DomainError } from './errors';
+import type { ModelType } from '$lib/inventory/types';
 
 /**
  * Runs `work` in the caller's transaction, or in a new one when the caller has none. Every inventory
@@ -71,7 +72,7 @@ export function canonicalJson(value: unknown): string {
 }
 
 /** Whether a loudspeaker or amplifier model with this id exists. */
-export async function specModelExists(modelType: 'loudspeaker' | 'amplifier', id: number, transaction?: Transaction): Promise<boolean> {
+export async function specModelExists(modelType: ModelType, id: number, transaction?: Transaction): Promise<boolean> {
 	const found = modelType === 'loudspeaker' ? await LoudspeakerModel.findByPk(id, { transaction }) : await AmplifierModel.findByPk(id, { transaction });
 	return found !== null;
 }

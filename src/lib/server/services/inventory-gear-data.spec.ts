@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { useTestDatabase } from '../../../../tests/helpers/db';
-import { makeClientUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
+import { makeContactUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
 import { amplifierInput, loudspeakerInput, staffUser, uniqueName } from '../../../../tests/helpers/inventory-inputs';
 import { serialiseDirectivityCsv } from '$lib/inventory/directivity-csv';
 import { toLoudspeakerSpec } from '$lib/inventory/to-spec';
@@ -51,7 +51,7 @@ describe('loudspeaker gear data (band response, compression, directivity)', () =
 	it('a table change flags the open quotes that use the model for re-check', async () => {
 		const { pkg, loudspeaker } = await makeStockedPackage();
 		const desk = await makeStaffUser();
-		const { client } = await makeClientUser();
+		const { client } = await makeContactUser();
 		const quote = await createQuote({ clientId: client.id, eventName: 'Fixture event', packageId: pkg.id, request }, desk);
 		expect((await getQuote(quote.id, desk)).needsRecheck).toBe(false);
 		await loudspeakers.update(loudspeaker.id, { directivity: table }, null);
@@ -114,7 +114,7 @@ describe('package group placement (height, spacing, own pattern)', () => {
 		expect(created.groups[0]).toMatchObject({ heightM: 0.6, spacingM: 10, directivity: null });
 
 		const desk = await makeStaffUser();
-		const { client } = await makeClientUser();
+		const { client } = await makeContactUser();
 		const quote = await createQuote({ clientId: client.id, eventName: 'Fixture event', packageId: created.id, request: { ...request, programme: 'pop-rock' } }, desk);
 		expect((await getQuote(quote.id, desk)).needsRecheck).toBe(false);
 

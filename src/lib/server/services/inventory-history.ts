@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
-import type { HistoryModelType, SpecChangeRow } from '$lib/inventory/types';
-import { SpecChange, User } from '../db/models';
+import type { HistoryModelType, HistoryEntryRow } from '$lib/inventory/types';
+import { HistoryEntry, User } from '../db/models';
 import { historyText } from './inventory-common';
 
 /**
@@ -19,7 +19,7 @@ export async function recordChanges(
 	const now = after as Record<string, unknown>;
 	const changed = fields.filter((f) => historyText(old[f]) !== historyText(now[f]));
 	if (changed.length === 0) return [];
-	await SpecChange.bulkCreate(
+	await HistoryEntry.bulkCreate(
 		changed.map((field) => ({
 			...target,
 			field,
@@ -39,12 +39,12 @@ export async function recordCreation(
 	userId: number | null,
 	transaction: Transaction
 ): Promise<void> {
-	await SpecChange.create({ ...target, field: 'created', oldValue: null, newValue: label, userId }, { transaction });
+	await HistoryEntry.create({ ...target, field: 'created', oldValue: null, newValue: label, userId }, { transaction });
 }
 
 /** Newest first, with the name of the person who made each change. */
-export async function listHistory(modelType: HistoryModelType, modelId: number): Promise<SpecChangeRow[]> {
-	const rows = await SpecChange.findAll({
+export async function listHistory(modelType: HistoryModelType, modelId: number): Promise<HistoryEntryRow[]> {
+	const rows = await HistoryEntry.findAll({
 		where: { modelType, modelId },
 		include: [{ model: User, as: 'user', attributes: ['name'] }],
 		order: [
@@ -64,5 +64,5 @@ export async function listHistory(modelType: HistoryModelType, modelId: number):
 }
 
 export async function deleteHistory(modelType: HistoryModelType, modelId: number, transaction: Transaction): Promise<void> {
-	await SpecChange.destroy({ where: { modelType, modelId }, transaction });
+	await HistoryEntry.destroy({ where: { modelType, modelId }, transaction });
 }

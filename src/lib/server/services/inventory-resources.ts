@@ -2,11 +2,11 @@ import type { HistoryModelType } from '$lib/inventory/types';
 import { amplifiers } from './inventory-amplifiers';
 import { loudspeakers } from './inventory-loudspeakers';
 import { createPackage, deletePackage, getPackage, listPackages, updatePackage } from './inventory-packages';
-import { createUnit, deleteUnit, getUnit, listUnits, updateUnit } from './inventory-units';
+import { createStockUnit, deleteStockUnit, getStockUnit, listStockUnits, updateStockUnit } from './inventory-units';
 
 /** The four inventory collections behind one shape, so the pages and API treat them alike where they are alike. */
 export const packages = { list: listPackages, get: getPackage, create: createPackage, update: updatePackage, remove: deletePackage };
-export const units = { list: listUnits, get: getUnit, create: createUnit, update: updateUnit, remove: deleteUnit };
+export const stockUnits = { list: listStockUnits, get: getStockUnit, create: createStockUnit, update: updateStockUnit, remove: deleteStockUnit };
 export { amplifiers, loudspeakers };
 
 export const HISTORY_TYPES = { loudspeakers: 'loudspeaker', amplifiers: 'amplifier', packages: 'package', units: 'unit' } as const satisfies Record<string, HistoryModelType>;

@@ -5,10 +5,11 @@ import { DomainError } from './errors';
 import { deleteHistory, recordChanges, recordCreation } from './inventory-history';
 import { plainRow, translateDbError, validOrThrow, withTransaction } from './inventory-common';
 import { deleteStoredFiles } from '../storage/stored-files';
-import { flagQuotesForSpecChange, type SpecModelType } from './recheck';
+import { flagQuotesForSpecChange } from './recheck';
+import type { ModelType } from '$lib/inventory/types';
 
 interface SpecModelConfig<S extends z.ZodType> {
-	modelType: SpecModelType;
+	modelType: ModelType;
 	model: ModelStatic<Model>;
 	/** The complete schema with its cross-field rules. */
 	schema: S;

@@ -47,16 +47,16 @@ async function modelColumns(input: StockUnitInput, transaction: Transaction) {
 	};
 }
 
-export async function listUnits(): Promise<StockUnitRow[]> {
+export async function listStockUnits(): Promise<StockUnitRow[]> {
 	const rows = await StockUnit.findAll({ include, order: [['serial', 'ASC']] });
 	return rows.map(toRow);
 }
 
-export async function getUnit(id: number): Promise<StockUnitRow> {
+export async function getStockUnit(id: number): Promise<StockUnitRow> {
 	return toRow(await find(id));
 }
 
-export async function createUnit(input: StockUnitInput, actorId: number | null, transaction?: Transaction): Promise<StockUnitRow> {
+export async function createStockUnit(input: StockUnitInput, actorId: number | null, transaction?: Transaction): Promise<StockUnitRow> {
 	const values = validOrThrow(stockUnitSchema, input);
 	return withTransaction(transaction, async (t) => {
 		const { modelId: _m, ...fields } = values;
@@ -68,7 +68,7 @@ export async function createUnit(input: StockUnitInput, actorId: number | null, 
 	});
 }
 
-export async function updateUnit(id: number, changes: StockUnitPatch, actorId: number | null, transaction?: Transaction): Promise<StockUnitRow> {
+export async function updateStockUnit(id: number, changes: StockUnitPatch, actorId: number | null, transaction?: Transaction): Promise<StockUnitRow> {
 	return withTransaction(transaction, async (t) => {
 		const current = await find(id, t);
 		const before = toRow(current);
@@ -81,7 +81,7 @@ export async function updateUnit(id: number, changes: StockUnitPatch, actorId: n
 	});
 }
 
-export async function deleteUnit(id: number, transaction?: Transaction): Promise<void> {
+export async function deleteStockUnit(id: number, transaction?: Transaction): Promise<void> {
 	await withTransaction(transaction, async (t) => {
 		const current = await find(id, t);
 		await deleteHistory('unit', id, t);

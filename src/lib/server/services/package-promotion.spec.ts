@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { useTestDatabase } from '../../../../tests/helpers/db';
-import { makeClientUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
+import { makeContactUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
 import { getLoadedPackage } from './inventory-packages';
 import { promoteSystem } from './package-promotion';
 import { createQuote } from './quotes';
@@ -14,7 +14,7 @@ const request = {
 
 async function quoteWith(offer: 'system' | 'package') {
 	const desk = await makeStaffUser();
-	const { client } = await makeClientUser();
+	const { client } = await makeContactUser();
 	const stock = await makeStockedPackage({ cabinets: 4, units: 4, amplifierUnits: 2 });
 	const system = { groups: [{ loudspeakerModelId: stock.loudspeaker.id, count: 2, stacks: 2, amplifierModelId: stock.amplifier.id, cabinetsPerChannel: 2, spacingM: 8 }] };
 	const quote = await createQuote(

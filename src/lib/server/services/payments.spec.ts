@@ -5,7 +5,7 @@
  */
 import { describe, expect, it, vi } from 'vitest';
 import { useTestDatabase } from '../../../../tests/helpers/db';
-import { makeClientUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
+import { makeContactUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
 import { eventFor, fakeConfig } from '../../../../tests/helpers/stripe-fake';
 import { CARD_DECLINED, CARD_SUCCEEDS, payOnHostedPage } from '../../../../tests/fakes/stripe/testing';
 import { Booking, BookingLine, Invoice, Quote } from '../db/models';
@@ -24,7 +24,7 @@ const request = {
 async function sentQuote(units = 2) {
 	const stock = await makeStockedPackage({ cabinets: 2, units });
 	const desk = await makeStaffUser();
-	const { client, user } = await makeClientUser();
+	const { client, user } = await makeContactUser();
 	const quote = await createQuote({ clientId: client.id, eventName: 'Money path', packageId: stock.pkg.id, request }, desk);
 	await applyQuoteAction(quote.id, 'send', desk);
 	return { quote, desk, client: user, stock };
@@ -107,7 +107,7 @@ describe('racing for the last units', () => {
 	it('20 paid deposits competing for 5 units: exactly 5 bookings, the rest flagged with their payment kept', async () => {
 		const { pkg, loudspeaker } = await makeStockedPackage({ cabinets: 1, units: 5, amplifierUnits: 20 });
 		const desk = await makeStaffUser();
-		const { client } = await makeClientUser();
+		const { client } = await makeContactUser();
 		const quotes = [];
 		for (let i = 0; i < 20; i++) {
 			quotes.push(await createQuote({ clientId: client.id, eventName: `Race ${i}`, packageId: pkg.id, request: { ...request, startDate: '2034-01-05', endDate: '2034-01-05' } }, desk));

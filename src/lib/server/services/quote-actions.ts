@@ -6,7 +6,7 @@ import { db, Client, OutboundEmail, Quote } from '../db';
 import { deliver, queueEmail } from '../mail/outbox';
 import { invoiceEmail } from '../mail/payment-emails';
 import { quoteSentEmail } from '../mail/quote-emails';
-import { clientAccountFor, createSignInLink } from '../auth/sign-in-links';
+import { contactAccountFor, createSignInLink } from '../auth/sign-in-links';
 import type { SessionUser } from '../users';
 import { cancelMoney } from './cancellation';
 import { noteForDesk } from './desk-notices';
@@ -106,7 +106,7 @@ export async function applyQuoteAction(id: number, input: QuoteActionInput | Quo
 			if (action === 'cancel') await releaseBooking(id, transaction);
 			if (action === 'send') {
 				await quote.update({ validUntil: validUntilFor(today(), settings.quoteValidityDays), clientResponse: null }, { transaction });
-				const account = await clientAccountFor(client, transaction);
+				const account = await contactAccountFor(client, transaction);
 				const token = await createSignInLink(account.id, `/quotes/${id}`, transaction);
 				const sent = { ...before, status: next, validUntil: quote.validUntil };
 				return [(await queueEmail({ ...quoteSentEmail(sent, client.email, company, token), attachments: attachment ? [attachment] : [] }, transaction)).id];

@@ -3,7 +3,7 @@ import { fail, redirect, type ActionFailure } from '@sveltejs/kit';
 import { setError, superValidate, type SuperValidated } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import type { z } from 'zod';
-import { formFieldOf, requestFormSchema, type RequestForm } from '$lib/schemas/quotes';
+import { formFieldOf, quoteRequestFormSchema, type QuoteRequestForm } from '$lib/schemas/quotes';
 import { composedFrom } from '$lib/systems/compose';
 import { AmplifierModel, Client, LoudspeakerModel } from '../db';
 import { loadedPackages } from './catalogue';
@@ -13,7 +13,7 @@ import { listProgrammes } from './programmes';
 import { getSettings } from './settings';
 import { listSites } from './sites';
 
-export async function requestFormOptions() {
+export async function quoteRequestFormOptions() {
 	const [clients, programmes, settings, sites, composer] = await Promise.all([
 		Client.findAll({ attributes: ['id', 'name'], order: [['name', 'ASC']] }),
 		listProgrammes(),
@@ -49,10 +49,10 @@ async function composerCatalogue() {
 export async function saveFromForm<S extends z.ZodType>(
 	request: Request,
 	bodySchema: S,
-	toBody: (form: RequestForm) => Record<string, unknown>,
+	toBody: (form: QuoteRequestForm) => Record<string, unknown>,
 	save: (input: z.output<S>) => Promise<{ id: number }>
-): Promise<ActionFailure<{ form: SuperValidated<RequestForm> }>> {
-	const form = await superValidate(request, zod4(requestFormSchema));
+): Promise<ActionFailure<{ form: SuperValidated<QuoteRequestForm> }>> {
+	const form = await superValidate(request, zod4(quoteRequestFormSchema));
 	if (!form.valid) return fail(400, { form });
 	const parsed = bodySchema.safeParse(toBody(form.data));
 	if (!parsed.success) {

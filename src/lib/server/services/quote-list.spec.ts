@@ -2,7 +2,7 @@
 import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { useTestDatabase } from '../../../../tests/helpers/db';
-import { makeClientUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
+import { makeContactUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
 import { countQuotes, createQuote, getQuote, listQuotes } from './quotes';
 
 useTestDatabase();
@@ -16,7 +16,7 @@ describe('the quote list', () => {
 	it('finds by words of the event or by reference, newest first, within the limit, each row as the desk view sums it up', async () => {
 		const { pkg } = await makeStockedPackage();
 		const desk = await makeStaffUser();
-		const { client, user } = await makeClientUser();
+		const { client, user } = await makeContactUser();
 		const tag = randomUUID().slice(0, 8);
 		const made = [];
 		for (let i = 0; i < 3; i++) made.push(await createQuote({ clientId: client.id, eventName: `Harbour 50%_${tag} ${i}`, packageId: pkg.id, request }, desk));
@@ -35,7 +35,7 @@ describe('the quote list', () => {
 
 		// A client sees only their organisation's quotes, search or not.
 		expect((await listQuotes(user, { search: tag })).map((q) => q.clientId)).toEqual([client.id, client.id, client.id]);
-		const stranger = (await makeClientUser()).user;
+		const stranger = (await makeContactUser()).user;
 		expect(await countQuotes(stranger, tag)).toBe(0);
 	});
 });

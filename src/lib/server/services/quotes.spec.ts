@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { useTestDatabase } from '../../../../tests/helpers/db';
-import { makeClientUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
+import { makeContactUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
 import { BOOKINGS, invalidate } from '../cache';
 import { Booking, BookingLine, LoudspeakerModel } from '../db/models';
 import { applyQuoteAction } from './quote-actions';
@@ -23,7 +23,7 @@ describe('availability against confirmed bookings', () => {
 	it('counts only bookings overlapping the dates, and names the model that is short', async () => {
 		const { pkg, loudspeaker } = await makeStockedPackage({ cabinets: 2, units: 3 });
 		const desk = await makeStaffUser();
-		const { client } = await makeClientUser();
+		const { client } = await makeContactUser();
 		const other = await quoteFor(client.id, pkg.id, desk);
 		const booking = await Booking.create({ quoteId: other.id, status: 'confirmed', startDate: '2031-05-11', endDate: '2031-05-12' });
 		await BookingLine.create({ bookingId: booking.id, modelType: 'loudspeaker', modelId: loudspeaker.id, quantity: 2 });
@@ -45,7 +45,7 @@ describe('quotes', () => {
 	it('saves a snapshot with the price in minor units and versions on revision', async () => {
 		const { pkg } = await makeStockedPackage();
 		const desk = await makeStaffUser();
-		const { client } = await makeClientUser();
+		const { client } = await makeContactUser();
 		const quote = await quoteFor(client.id, pkg.id, desk);
 		expect(quote.status).toBe('draft');
 		expect(quote.version).toBe(1);
@@ -60,8 +60,8 @@ describe('quotes', () => {
 	it('keeps clients to their own quotes: another client gets 404, and sees none in the list', async () => {
 		const { pkg } = await makeStockedPackage();
 		const desk = await makeStaffUser();
-		const owner = await makeClientUser();
-		const stranger = await makeClientUser();
+		const owner = await makeContactUser();
+		const stranger = await makeContactUser();
 		const quote = await quoteFor(owner.client.id, pkg.id, desk);
 		await expect(getQuote(quote.id, owner.user)).resolves.toMatchObject({ id: quote.id });
 		await expect(getQuote(quote.id, stranger.user)).rejects.toMatchObject({ status: 404 });
@@ -72,7 +72,7 @@ describe('quotes', () => {
 	it('refuses illegal moves with 409 and roles that may not move with 403', async () => {
 		const { pkg } = await makeStockedPackage();
 		const desk = await makeStaffUser();
-		const owner = await makeClientUser();
+		const owner = await makeContactUser();
 		const quote = await quoteFor(owner.client.id, pkg.id, desk);
 		await expect(applyQuoteAction(quote.id, 'accept', owner.user)).rejects.toMatchObject({ status: 409 });
 		await expect(applyQuoteAction(quote.id, 'send', owner.user)).rejects.toMatchObject({ status: 403 });
@@ -83,7 +83,7 @@ describe('quotes', () => {
 	it('flags an open quote for re-check when a spec it used changes, and refuses to send it until revised', async () => {
 		const { pkg, loudspeaker } = await makeStockedPackage();
 		const desk = await makeStaffUser();
-		const owner = await makeClientUser();
+		const owner = await makeContactUser();
 		const quote = await quoteFor(owner.client.id, pkg.id, desk);
 		expect(await flagQuotesForSpecChange('loudspeaker', loudspeaker.id)).toBe(1);
 		expect((await getQuote(quote.id, desk)).needsRecheck).toBe(true);

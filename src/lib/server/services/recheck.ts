@@ -2,8 +2,8 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import { OPEN_STATUSES } from '$lib/quotes/states';
 import { Quote } from '../db/models';
 import { catalogueChanged } from './catalogue';
+import type { ModelType } from '$lib/inventory/types';
 
-export type SpecModelType = 'loudspeaker' | 'amplifier';
 
 /**
  * Called by the inventory services whenever a specification field the acoustic model uses changes.
@@ -11,7 +11,7 @@ export type SpecModelType = 'loudspeaker' | 'amplifier';
  * before sending; returns how many were flagged.
  */
 export async function flagQuotesForSpecChange(
-	modelType: SpecModelType,
+	modelType: ModelType,
 	modelId: number,
 	transaction?: Transaction
 ): Promise<number> {

@@ -5,8 +5,8 @@ import { AmplifierModel, LoudspeakerModel, ModelTestInterval, StockUnit } from '
 import { CATALOGUE, invalidate } from '../cache';
 import { DomainError } from './errors';
 import { getSettings } from './settings';
+import type { ModelType } from '$lib/inventory/types';
 
-type ModelType = 'loudspeaker' | 'amplifier';
 
 export interface IntervalLookup {
 	defaultDays: number;

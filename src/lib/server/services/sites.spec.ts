@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { useTestDatabase } from '../../../../tests/helpers/db';
-import { makeClientUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
+import { makeContactUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
 import { siteSchema } from '$lib/schemas/sites';
 import { DomainError } from './errors';
 import { evaluateForDesk } from './evaluations';
@@ -72,7 +72,7 @@ describe('sites', () => {
 	it('keeps the quote’s snapshot when the site is edited or deleted later', async () => {
 		const { pkg } = await makeStockedPackage();
 		const staff = await makeStaffUser();
-		const { client } = await makeClientUser();
+		const { client } = await makeContactUser();
 		const site = await createSite(fixture('Test field D'));
 		const quote = await createQuote({ clientId: client.id, eventName: 'Site fixture', packageId: pkg.id, request: { ...request, siteId: site.id } }, staff);
 		expect(quote.site).toMatchObject({ siteId: site.id, name: 'Test field D', allowanceDb: 0 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { useTestDatabase } from '../../../../tests/helpers/db';
-import { makeClientUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
+import { makeContactUser, makeStaffUser, makeStockedPackage } from '../../../../tests/helpers/inventory';
 import { BOOKINGS, invalidate } from '../cache';
 import { Booking, BookingLine } from '../db/models';
 import { applyQuoteAction } from './quote-actions';
@@ -16,7 +16,7 @@ const request = {
 
 async function composedQuote() {
 	const desk = await makeStaffUser();
-	const { client } = await makeClientUser();
+	const { client } = await makeContactUser();
 	const { loudspeaker, amplifier, pkg } = await makeStockedPackage({ cabinets: 2, units: 2 });
 	const system = { groups: [{ loudspeakerModelId: loudspeaker.id, count: 1, stacks: 2 as const, amplifierModelId: amplifier.id, cabinetsPerChannel: 1 }] };
 	const quote = await createQuote({ clientId: client.id, eventName: 'Composed system fixture', system, request }, desk);
@@ -57,7 +57,7 @@ describe('a quote with a composed system', () => {
 
 	it('refuses models that are not in the inventory with a field error', async () => {
 		const desk = await makeStaffUser();
-		const { client } = await makeClientUser();
+		const { client } = await makeContactUser();
 		const system = { groups: [{ loudspeakerModelId: 999999, count: 1, stacks: 1 as const, amplifierModelId: 999999, cabinetsPerChannel: 1 }] };
 		await expect(createQuote({ clientId: client.id, eventName: 'Nothing', system, request }, desk)).rejects.toMatchObject({
 			status: 422,
@@ -67,7 +67,7 @@ describe('a quote with a composed system', () => {
 
 	it('two reservations racing for the last units of a composed system: one books, the other is refused, then a clear 409 at acceptance', async () => {
 		const desk = await makeStaffUser();
-		const { client } = await makeClientUser();
+		const { client } = await makeContactUser();
 		const { loudspeaker, amplifier } = await makeStockedPackage({ cabinets: 2, units: 2, amplifierUnits: 2 });
 		const system = { groups: [{ loudspeakerModelId: loudspeaker.id, count: 1, stacks: 2, amplifierModelId: amplifier.id, cabinetsPerChannel: 1 }] };
 		const raced = { ...request, startDate: '2031-10-04', endDate: '2031-10-05' };

@@ -7,6 +7,7 @@ import type { ModelKey } from '$lib/quotes/availability';
 import { quoteReference } from '$lib/quotes/reference';
 import { AmplifierModel, Booking, BookingLine, BookingUnit, LoudspeakerModel, StockUnit } from '../db';
 import { DomainError } from './errors';
+import type { ModelType } from '$lib/inventory/types';
 
 export interface UnitLabel {
 	serial: string;
@@ -20,13 +21,13 @@ async function label(serial: string, modelName: string): Promise<UnitLabel> {
 	return { serial, modelName, svg };
 }
 
-async function modelNameOf(modelType: 'loudspeaker' | 'amplifier', id: number): Promise<string | null> {
+async function modelNameOf(modelType: ModelType, id: number): Promise<string | null> {
 	const model = modelType === 'loudspeaker' ? await LoudspeakerModel.findByPk(id, { attributes: ['name'] }) : await AmplifierModel.findByPk(id, { attributes: ['name'] });
 	return model?.name ?? null;
 }
 
 export async function labelsForModel(key: ModelKey): Promise<{ title: string; labels: UnitLabel[] }> {
-	const [modelType, id] = key.split(':') as ['loudspeaker' | 'amplifier', string];
+	const [modelType, id] = key.split(':') as [ModelType, string];
 	const name = await modelNameOf(modelType, Number(id));
 	if (!name) throw new DomainError(404, 'No such model.');
 	const column = modelType === 'loudspeaker' ? 'loudspeakerModelId' : 'amplifierModelId';

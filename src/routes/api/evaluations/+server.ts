@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
 import { parseJsonBody } from '$lib/server/http';
-import { evaluationWithSystemSchema } from '$lib/schemas/systems';
+import { quoteRequestWithSystemSchema } from '$lib/schemas/systems';
 import { orHttpError } from '$lib/server/services/errors';
 import { evaluateForDesk } from '$lib/server/services/evaluations';
 import { loadSystem } from '$lib/server/services/systems';
@@ -13,6 +13,6 @@ import type { RequestHandler } from './$types';
  */
 export const POST: RequestHandler = async (event) => {
 	requireCapability(event, 'evaluations:run');
-	const { system, ...input } = await parseJsonBody(event.request, evaluationWithSystemSchema);
+	const { system, ...input } = await parseJsonBody(event.request, quoteRequestWithSystemSchema);
 	return json(await orHttpError(async () => evaluateForDesk(input, system ? { packages: [await loadSystem(system)] } : {})));
 };

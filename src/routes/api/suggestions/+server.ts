@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
 import { parseJsonBody } from '$lib/server/http';
-import { evaluationRequestSchema } from '$lib/schemas/evaluation';
+import { quoteRequestSchema } from '$lib/schemas/evaluation';
 import { orHttpError } from '$lib/server/services/errors';
 import { suggestForDesk } from '$lib/server/services/suggestions';
 import type { RequestHandler } from './$types';
@@ -15,7 +15,7 @@ const NDJSON = 'application/x-ndjson';
  */
 export const POST: RequestHandler = async (event) => {
 	requireCapability(event, 'evaluations:run');
-	const input = await parseJsonBody(event.request, evaluationRequestSchema);
+	const input = await parseJsonBody(event.request, quoteRequestSchema);
 	if (!event.request.headers.get('accept')?.includes(NDJSON)) return json(await orHttpError(() => suggestForDesk(input)));
 
 	const encoder = new TextEncoder();

@@ -7,6 +7,7 @@ import {
 	type Sequelize
 } from 'sequelize';
 import { BOOKING_STATES, type BookingState } from '../../../bookings/states';
+import type { ModelType } from '../../../inventory/types';
 
 /** Stock reserved for a quote's hire dates; confirmed and out bookings hold units. */
 export class Booking extends Model<InferAttributes<Booking>, InferCreationAttributes<Booking>> {
@@ -40,7 +41,7 @@ export class Booking extends Model<InferAttributes<Booking>, InferCreationAttrib
 export class BookingLine extends Model<InferAttributes<BookingLine>, InferCreationAttributes<BookingLine>> {
 	declare id: CreationOptional<number>;
 	declare bookingId: number;
-	declare modelType: 'loudspeaker' | 'amplifier';
+	declare modelType: ModelType;
 	declare modelId: number;
 	declare quantity: number;
 	declare createdAt: CreationOptional<Date>;

@@ -4,11 +4,11 @@ import { LoudspeakerModel } from './loudspeaker-model';
 import { ModelAttachment } from './model-attachment';
 import { Package } from './package';
 import { PackageGroup } from './package-group';
-import { SpecChange } from './spec-change';
+import { HistoryEntry } from './history-entry';
 import { StockUnit } from './stock-unit';
 import { User } from './user';
 
-export { AmplifierModel, LoudspeakerModel, ModelAttachment, Package, PackageGroup, SpecChange, StockUnit };
+export { AmplifierModel, LoudspeakerModel, ModelAttachment, Package, PackageGroup, HistoryEntry, StockUnit };
 
 /** Registers the inventory's models and associations (after User, which the history refers to). */
 export function initInventoryModels(sequelize: Sequelize): void {
@@ -17,7 +17,7 @@ export function initInventoryModels(sequelize: Sequelize): void {
 	Package.initModel(sequelize);
 	PackageGroup.initModel(sequelize);
 	StockUnit.initModel(sequelize);
-	SpecChange.initModel(sequelize);
+	HistoryEntry.initModel(sequelize);
 	ModelAttachment.initModel(sequelize);
 
 	Package.hasMany(PackageGroup, { foreignKey: 'packageId', as: 'groups', onDelete: 'CASCADE' });
@@ -26,5 +26,5 @@ export function initInventoryModels(sequelize: Sequelize): void {
 	PackageGroup.belongsTo(AmplifierModel, { foreignKey: 'amplifierModelId', as: 'amplifier' });
 	StockUnit.belongsTo(LoudspeakerModel, { foreignKey: 'loudspeakerModelId', as: 'loudspeaker' });
 	StockUnit.belongsTo(AmplifierModel, { foreignKey: 'amplifierModelId', as: 'amplifier' });
-	SpecChange.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+	HistoryEntry.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 }

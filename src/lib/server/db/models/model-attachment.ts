@@ -8,11 +8,12 @@ import {
 	type Sequelize
 } from 'sequelize';
 import type { User } from './user';
+import type { ModelType } from '../../../inventory/types';
 
 /** A spec sheet (PDF) or photo of a model; the bytes live in `stored_files` under `storedName`. */
 export class ModelAttachment extends Model<InferAttributes<ModelAttachment>, InferCreationAttributes<ModelAttachment>> {
 	declare id: CreationOptional<number>;
-	declare modelType: 'loudspeaker' | 'amplifier';
+	declare modelType: ModelType;
 	declare modelId: number;
 	declare kind: 'spec-sheet' | 'photo';
 	declare originalName: string;

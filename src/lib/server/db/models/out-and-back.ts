@@ -6,6 +6,7 @@ import {
 	type InferCreationAttributes,
 	type Sequelize
 } from 'sequelize';
+import type { ModelType } from '../../../inventory/types';
 
 /** One step in a booking's life: a unit scanned out or back, or the booking moving to a new state. */
 export class BookingEvent extends Model<InferAttributes<BookingEvent>, InferCreationAttributes<BookingEvent>> {
@@ -92,7 +93,7 @@ export class Repair extends Model<InferAttributes<Repair>, InferCreationAttribut
 /** A model's own electrical safety test interval, overriding the company default. */
 export class ModelTestInterval extends Model<InferAttributes<ModelTestInterval>, InferCreationAttributes<ModelTestInterval>> {
 	declare id: CreationOptional<number>;
-	declare modelType: 'loudspeaker' | 'amplifier';
+	declare modelType: ModelType;
 	declare modelId: number;
 	declare days: number;
 	declare updatedAt: CreationOptional<Date>;

@@ -7,6 +7,7 @@ import {
 	type NonAttribute,
 	type Sequelize
 } from 'sequelize';
+import type { Weighting } from '../../../acoustics/types';
 import type { Ground } from '../../../schemas/sites';
 
 /** A place the company works at again and again; positions are metres from the system. */
@@ -56,7 +57,7 @@ export class SiteReceiver extends Model<InferAttributes<SiteReceiver>, InferCrea
 	declare y: number;
 	declare heightM: number;
 	declare limitDb: number;
-	declare weighting: 'A' | 'C' | 'Z';
+	declare weighting: Weighting;
 	declare bandHz: 63 | 125 | null;
 	declare period: string;
 	declare notes: string;

@@ -8,18 +8,19 @@ import {
 	type NonAttribute,
 	type Sequelize
 } from 'sequelize';
-import { UNIT_STATUSES, type UnitStatus } from '../../../schemas/inventory-units';
+import { STOCK_UNIT_STATUSES, type StockUnitStatus } from '../../../schemas/inventory-units';
 import type { AmplifierModel } from './amplifier-model';
 import type { LoudspeakerModel } from './loudspeaker-model';
+import type { ModelType } from '../../../inventory/types';
 
 /** One physical cabinet or amplifier with its serial; exactly one of the two model ids is set. */
 export class StockUnit extends Model<InferAttributes<StockUnit>, InferCreationAttributes<StockUnit>> {
 	declare id: CreationOptional<number>;
 	declare serial: string;
-	declare modelType: 'loudspeaker' | 'amplifier';
+	declare modelType: ModelType;
 	declare loudspeakerModelId: ForeignKey<LoudspeakerModel['id']> | null;
 	declare amplifierModelId: ForeignKey<AmplifierModel['id']> | null;
-	declare status: UnitStatus;
+	declare status: StockUnitStatus;
 	declare location: string;
 	/** A calendar date (yyyy-mm-dd). */
 	declare lastTestedAt: string | null;
@@ -37,7 +38,7 @@ export class StockUnit extends Model<InferAttributes<StockUnit>, InferCreationAt
 				modelType: { type: DataTypes.ENUM('loudspeaker', 'amplifier'), allowNull: false },
 				loudspeakerModelId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
 				amplifierModelId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
-				status: { type: DataTypes.ENUM(...UNIT_STATUSES), allowNull: false },
+				status: { type: DataTypes.ENUM(...STOCK_UNIT_STATUSES), allowNull: false },
 				location: { type: DataTypes.STRING(120), allowNull: false },
 				lastTestedAt: { type: DataTypes.DATEONLY, allowNull: true },
 				notes: { type: DataTypes.TEXT, allowNull: false },

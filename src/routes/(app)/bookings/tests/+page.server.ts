@@ -6,6 +6,7 @@ import { requireCapability } from '$lib/server/auth/guards';
 import { DomainError } from '$lib/server/services/errors';
 import { modelIntervals, recordTestPassed, setModelInterval, unitsDueForTest } from '$lib/server/services/safety-tests';
 import type { Actions, PageServerLoad } from './$types';
+import type { ModelType } from '$lib/inventory/types';
 
 const unitIdSchema = z.object({ unitId: z.coerce.number().int().positive() });
 const today = () => new Date().toISOString().slice(0, 10);
@@ -33,7 +34,7 @@ export const actions: Actions = {
 		requireCapability(event, 'bookings:handle');
 		const parsed = testIntervalSchema.safeParse(Object.fromEntries(await event.request.formData()));
 		if (!parsed.success) return fail(400, { form: 'interval', ok: false, model: null, message: parsed.error.issues[0].message });
-		const [modelType, id] = parsed.data.model.split(':') as ['loudspeaker' | 'amplifier', string];
+		const [modelType, id] = parsed.data.model.split(':') as [ModelType, string];
 		try {
 			await setModelInterval(modelType, Number(id), parsed.data.days);
 			return { form: 'interval', model: parsed.data.model, ok: true, message: parsed.data.days ? `Every ${parsed.data.days} days.` : 'Company default.' };

@@ -1,8 +1,8 @@
 import { requireCapability } from '$lib/server/auth/guards';
-import { listUnits } from '$lib/server/services/inventory-units';
+import { listStockUnits } from '$lib/server/services/inventory-units';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
 	requireCapability(event, 'inventory:read');
-	return { units: await listUnits() };
+	return { units: await listStockUnits() };
 };

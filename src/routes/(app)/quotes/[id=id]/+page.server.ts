@@ -5,8 +5,8 @@ import type { QuoteActionInput } from '$lib/schemas/quotes';
 import { requireCapability } from '$lib/server/auth/guards';
 import { DomainError, orHttpError } from '$lib/server/services/errors';
 import { applyQuoteAction, termsFor } from '$lib/server/services/quote-actions';
-import { hireStateForClient } from '$lib/server/services/booking-life';
-import { invoiceBalance } from '$lib/server/services/balance';
+import { bookingStateForClient } from '$lib/server/services/booking-life';
+import { createBalanceInvoice } from '$lib/server/services/balance-invoice';
 import { getQuote } from '$lib/server/services/quotes';
 import { promoteSystem } from '$lib/server/services/package-promotion';
 import { getSettings } from '$lib/server/services/settings';
@@ -18,9 +18,9 @@ export const load: PageServerLoad = async (event) => {
 	const [quote, settings] = await Promise.all([orHttpError(() => getQuote(Number(event.params.id), user)), getSettings()]);
 	const expired = quote.status === 'sent' && isExpired(quote.validUntil, new Date().toISOString().slice(0, 10));
 	// getQuote already refused a client another organisation's quote, so the hire's state is theirs.
-	const hire = canAny(user.role, 'bookings:read', 'bookings:read-own') ? await hireStateForClient(quote.id) : null;
+	const booking = canAny(user.role, 'bookings:read', 'bookings:read-own') ? await bookingStateForClient(quote.id) : null;
 	const canPromote = quote.system !== null && can(user.role, 'inventory:edit');
-	return { quote, actions: allowedActions(quote.status), terms: termsFor(quote, settings), expired, hire, canPromote };
+	return { quote, actions: allowedActions(quote.status), terms: termsFor(quote, settings), expired, booking, canPromote };
 };
 
 /** The form's extra fields: the ticked terms box and the client's message. */
@@ -61,11 +61,11 @@ export const actions: Actions = {
 			throw err;
 		}
 	},
-	balance: async (event) => {
+	balanceInvoice: async (event) => {
 		const user = requireCapability(event, 'invoices:issue');
 		try {
-			const outcome = await invoiceBalance(Number(event.params.id), user);
-			return { done: 'balance', mailSent: outcome.mailSent };
+			const outcome = await createBalanceInvoice(Number(event.params.id), user);
+			return { done: 'balance-invoice', mailSent: outcome.mailSent };
 		} catch (err) {
 			if (err instanceof DomainError) return fail(err.status, { actionError: err.message });
 			throw err;

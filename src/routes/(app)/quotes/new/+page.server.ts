@@ -1,8 +1,8 @@
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireCapability } from '$lib/server/auth/guards';
-import { quoteBodyFromForm, quoteCreateSchema, requestFormSchema } from '$lib/schemas/quotes';
-import { requestFormOptions, saveFromForm } from '$lib/server/services/quote-form';
+import { quoteBodyFromForm, quoteCreateSchema, quoteRequestFormSchema } from '$lib/schemas/quotes';
+import { quoteRequestFormOptions, saveFromForm } from '$lib/server/services/quote-form';
 import { createQuote } from '$lib/server/services/quotes';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -15,12 +15,12 @@ function nextSaturday(): string {
 
 export const load: PageServerLoad = async (event) => {
 	requireCapability(event, 'quotes:write');
-	const options = await requestFormOptions();
+	const options = await quoteRequestFormOptions();
 	const date = nextSaturday();
 	const clientId = Number(event.url.searchParams.get('client')) || null;
 	const form = await superValidate(
 		{ startDate: date, endDate: date, distanceUnit: options.distanceUnit, clientId },
-		zod4(requestFormSchema),
+		zod4(quoteRequestFormSchema),
 		{ errors: false }
 	);
 	return { form, ...options };

@@ -7,14 +7,14 @@ import { requireCapability } from '$lib/server/auth/guards';
 import { deleteOrExplain, refusal, unitFormOptions } from '$lib/server/inventory-pages';
 import { orHttpError } from '$lib/server/services/errors';
 import { listHistory } from '$lib/server/services/inventory-history';
-import { deleteUnit, getUnit, updateUnit } from '$lib/server/services/inventory-units';
+import { deleteStockUnit, getStockUnit, updateStockUnit } from '$lib/server/services/inventory-units';
 import type { Actions, PageServerLoad } from './$types';
 
 /** One unit: its details and history for everyone on staff, the edit form for the warehouse. */
 export const load: PageServerLoad = async (event) => {
 	const user = requireCapability(event, 'inventory:read');
 	const id = Number(event.params.id);
-	const unit = await orHttpError(() => getUnit(id));
+	const unit = await orHttpError(() => getStockUnit(id));
 	const editing = can(user.role, 'inventory:edit')
 		? { form: await superValidate(unit, zod4(stockUnitSchema)), ...(await unitFormOptions()) }
 		: null;
@@ -28,7 +28,7 @@ export const actions: Actions = {
 		const form = await superValidate(event.request, zod4(stockUnitSchema));
 		if (!form.valid) return fail(400, { form });
 		try {
-			await updateUnit(id, form.data, actor.id);
+			await updateStockUnit(id, form.data, actor.id);
 		} catch (err) {
 			return refusal(form, err);
 		}
@@ -36,6 +36,6 @@ export const actions: Actions = {
 	},
 	delete: async (event) => {
 		requireCapability(event, 'inventory:edit');
-		return deleteOrExplain(() => deleteUnit(Number(event.params.id)), '/inventory/units');
+		return deleteOrExplain(() => deleteStockUnit(Number(event.params.id)), '/inventory/units');
 	}
 };

@@ -4,7 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { stockUnitSchema } from '$lib/schemas/inventory-units';
 import { requireCapability } from '$lib/server/auth/guards';
 import { refusal, unitFormOptions } from '$lib/server/inventory-pages';
-import { createUnit } from '$lib/server/services/inventory-units';
+import { createStockUnit } from '$lib/server/services/inventory-units';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
@@ -20,7 +20,7 @@ export const actions: Actions = {
 		if (!form.valid) return fail(400, { form });
 		let id: number;
 		try {
-			id = (await createUnit(form.data, actor.id)).id;
+			id = (await createStockUnit(form.data, actor.id)).id;
 		} catch (err) {
 			return refusal(form, err);
 		}

@@ -3,9 +3,9 @@ import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { isEditable } from '$lib/quotes/states';
 import { requireCapability } from '$lib/server/auth/guards';
-import { evaluationBodyFromForm, formFromRequest, quoteBodyFromForm, quoteReviseSchema, requestFormSchema } from '$lib/schemas/quotes';
+import { evaluationBodyFromForm, formFromRequest, quoteBodyFromForm, quoteReviseSchema, quoteRequestFormSchema } from '$lib/schemas/quotes';
 import { orHttpError } from '$lib/server/services/errors';
-import { requestFormOptions, saveFromForm } from '$lib/server/services/quote-form';
+import { quoteRequestFormOptions, saveFromForm } from '$lib/server/services/quote-form';
 import { getQuote, reviseQuote } from '$lib/server/services/quotes';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -21,8 +21,8 @@ export const load: PageServerLoad = async (event) => {
 		packageId: quote.system ? null : quote.result.packageId,
 		system: quote.system ? JSON.stringify(quote.system) : ''
 	};
-	const form = await superValidate(values, zod4(requestFormSchema), { errors: false });
-	return { form, quote: { id: quote.id, reference: quote.reference, clientName: quote.clientName }, ...(await requestFormOptions()) };
+	const form = await superValidate(values, zod4(quoteRequestFormSchema), { errors: false });
+	return { form, quote: { id: quote.id, reference: quote.reference, clientName: quote.clientName }, ...(await quoteRequestFormOptions()) };
 };
 
 export const actions: Actions = {

@@ -1,6 +1,6 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { invoiceBalance } from '$lib/server/services/balance';
+import { createBalanceInvoice } from '$lib/server/services/balance-invoice';
 import { orHttpError } from '$lib/server/services/errors';
 import type { RequestHandler } from './$types';
 
@@ -10,6 +10,6 @@ import type { RequestHandler } from './$types';
  */
 export const POST: RequestHandler = async (event) => {
 	const user = requireCapability(event, 'invoices:issue');
-	const { created, ...outcome } = await orHttpError(() => invoiceBalance(Number(event.params.id), user));
+	const { created, ...outcome } = await orHttpError(() => createBalanceInvoice(Number(event.params.id), user));
 	return json(outcome, { status: created ? 201 : 200 });
 };

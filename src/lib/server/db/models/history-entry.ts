@@ -12,7 +12,7 @@ import type { HistoryModelType } from '../../../inventory/types';
 import type { User } from './user';
 
 /** One changed field of an inventory record: who, when, old → new (values as text). */
-export class SpecChange extends Model<InferAttributes<SpecChange>, InferCreationAttributes<SpecChange>> {
+export class HistoryEntry extends Model<InferAttributes<HistoryEntry>, InferCreationAttributes<HistoryEntry>> {
 	declare id: CreationOptional<number>;
 	declare modelType: HistoryModelType;
 	declare modelId: number;
@@ -25,7 +25,7 @@ export class SpecChange extends Model<InferAttributes<SpecChange>, InferCreation
 	declare createdAt: CreationOptional<Date>;
 
 	static initModel(sequelize: Sequelize) {
-		SpecChange.init(
+		HistoryEntry.init(
 			{
 				id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
 				modelType: { type: DataTypes.ENUM('loudspeaker', 'amplifier', 'package', 'unit'), allowNull: false },
@@ -36,7 +36,7 @@ export class SpecChange extends Model<InferAttributes<SpecChange>, InferCreation
 				userId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
 				createdAt: DataTypes.DATE
 			},
-			{ sequelize, tableName: 'spec_changes', updatedAt: false }
+			{ sequelize, tableName: 'history_entries', updatedAt: false }
 		);
 	}
 }

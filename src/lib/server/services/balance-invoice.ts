@@ -13,7 +13,7 @@ import { getSettings } from './settings';
  * keys), and only the request that records it sends the e-mail. Concurrent requests queue on the
  * quote's row lock; the others answer `created: false` with the same invoice and send nothing.
  */
-export async function invoiceBalance(id: number, actor: SessionUser): Promise<{ quote: QuoteDetail; mailSent: boolean; created: boolean }> {
+export async function createBalanceInvoice(id: number, actor: SessionUser): Promise<{ quote: QuoteDetail; mailSent: boolean; created: boolean }> {
 	const quote = await getQuote(id, actor);
 	if (quote.status !== 'confirmed') throw new DomainError(409, 'The balance is invoiced once the booking is confirmed.');
 	if (quote.invoices.some((i) => i.kind === 'balance' && i.status !== 'void')) {

@@ -2,12 +2,12 @@ import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
 import { orHttpError } from '$lib/server/services/errors';
 import { listHistory } from '$lib/server/services/inventory-history';
-import { units } from '$lib/server/services/inventory-resources';
+import { stockUnits } from '$lib/server/services/inventory-resources';
 import type { RequestHandler } from './$types';
 
 export const GET: RequestHandler = async (event) => {
 	requireCapability(event, 'inventory:read');
 	const id = Number(event.params.id);
-	await orHttpError(() => units.get(id)); // 404 for an unknown id, not an empty history
+	await orHttpError(() => stockUnits.get(id)); // 404 for an unknown id, not an empty history
 	return json(await listHistory('unit', id));
 };
