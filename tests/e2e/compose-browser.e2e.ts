@@ -69,7 +69,7 @@ describe('composing a system, end to end', () => {
 		await page.getByRole('button', { name: 'Suggest systems from stock' }).click();
 		await page.getByText(/^Checked \d+ systems/).waitFor({ timeout: 30_000 });
 		await page.getByTestId('pick-system').first().check();
-		await page.getByTestId('adjust-system').first().click();
+		await page.getByTestId('compose-from-suggestion').click();
 
 		const composer = page.getByTestId('composer');
 		await composer.waitFor();
@@ -155,6 +155,12 @@ describe('composing a system, end to end', () => {
 		const box = await composer.boundingBox();
 		expect(box!.x + box!.width).toBeLessThanOrEqual(390);
 		expect(blocking(await runAxe(page))).toEqual([]);
+
+		// Back to a package, then composing again from the package the desk has picked.
+		await page.getByRole('button', { name: 'Use a package instead' }).click();
+		await page.getByTestId('compose-from-package').click();
+		const fromPackage = composer.getByRole('group', { name: 'Group 1' }).getByLabel('Loudspeaker model');
+		expect(await fromPackage.inputValue()).not.toBe('0');
 		await page.close();
 	}, 90_000);
 });
