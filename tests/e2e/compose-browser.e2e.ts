@@ -134,6 +134,18 @@ describe('composing a system, end to end', () => {
 		expect(withdrawn.status).toBe(200);
 	}, 60_000);
 
+	it('revising the quote opens its system in the composer, ready to save as a new version', async () => {
+		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+		await signIn(page, SALES);
+		await page.waitForURL(`${BASE_URL}/`);
+		await page.goto(`${quoteUrl}/edit`);
+		const composer = page.getByTestId('composer');
+		await composer.waitFor();
+		await composedPrice(composer);
+		await page.getByRole('button', { name: `Save new version with ${systemName}` }).waitFor();
+		await page.close();
+	}, 60_000);
+
 	it('the composer works on a 390 px phone: no sideways scrolling, nothing serious for axe', async () => {
 		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
 		await signIn(page, SALES);
