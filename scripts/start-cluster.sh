@@ -5,14 +5,7 @@
 # Runs in the background; `npm stop` stops it all. CLUSTER_APP_PORTS overrides "3001 3002".
 set -euo pipefail
 cd "$(dirname "$0")/.."
-. scripts/env.sh
-
-mkdir -p .data/run
-bash scripts/db.sh start
-node --import tsx scripts/migrate.ts up
-node --import tsx scripts/migrate.ts seed
-bash scripts/fakes.sh start
-bash scripts/build.sh
+. scripts/start-prepare.sh
 
 export RUN_DIR=.data/run APP_PORTS=${CLUSTER_APP_PORTS:-"3001 3002"}
 bash scripts/app-processes.sh start

@@ -3,15 +3,7 @@
 # Safe to run again: migrations and seeders skip what is done, services already running are reused.
 set -euo pipefail
 cd "$(dirname "$0")/.."
-. scripts/env.sh
-
-mkdir -p .data/run
-bash scripts/db.sh start
-node --import tsx scripts/migrate.ts up
-node --import tsx scripts/migrate.ts seed
-bash scripts/fakes.sh start
-
-bash scripts/build.sh
+. scripts/start-prepare.sh
 
 echo "[start] Throwline on $ORIGIN (stop with Ctrl-C; 'npm stop' also stops MariaDB and the fakes)"
 exec node build

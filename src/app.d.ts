@@ -1,4 +1,4 @@
-import type { Role } from '$lib/permissions';
+import type { SessionUser } from '$lib/server/auth/signed-in-user';
 
 declare global {
 	namespace App {
@@ -7,7 +7,7 @@ declare global {
 			errors?: Record<string, string[]>;
 		}
 		interface Locals {
-			user: { id: number; role: Role; clientId: number | null; name: string; email: string } | null;
+			user: SessionUser | null;
 		}
 		// interface PageData {}
 		// interface PageState {}

@@ -1,29 +1,10 @@
 import type { Handle } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
-import { cached } from '$lib/server/cache';
 import { syncStamps } from '$lib/server/cache-stamps';
-import { findActiveUser } from '$lib/server/users';
+import { findActiveUser, sessionClaims } from '$lib/server/auth/signed-in-user';
 import { unavailable } from './unavailable';
 
 const PUBLIC_PATHS = ['/api/health'];
-const SESSION_COOKIES = ['authjs.session-token', '__Secure-authjs.session-token'];
-
-/**
- * The user id and session version in the session cookie. Decrypting the cookie costs more than the
- * rest of a typical API call, so the answer for one cookie value is kept for a few seconds: it never
- * changes for that value. The person's row (active, role, current session version) is read on every
- * request below, so an ended session or a deactivation is never served from here.
- */
-async function sessionClaims(event: Parameters<Handle>[0]['event']): Promise<{ id: number; sessionVersion: number } | null> {
-	const token = SESSION_COOKIES.map((name) => event.cookies.get(name)).find(Boolean);
-	if (!token) return null;
-	return cached(`session:${token}`, async () => {
-		const session = (await event.locals.auth()) as { user?: { id?: string }; sessionVersion?: unknown } | null;
-		const id = Number(session?.user?.id);
-		const sessionVersion = Number(session?.sessionVersion);
-		return Number.isInteger(id) && id > 0 && Number.isInteger(sessionVersion) ? { id, sessionVersion } : null;
-	});
-}
 
 /**
  * Resolves the session cookie to the current user row, so role and active status are never stale,

@@ -2,6 +2,7 @@ import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { waitForMail } from '../fakes/mailbox';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
+import { CLIENT_EMAIL, openDeskRequest } from './desk';
 import { api, sessionCookie } from './http';
 
 let browser: Browser;
@@ -12,24 +13,12 @@ afterAll(async () => {
 	await browser?.close();
 });
 
-const CLIENT_EMAIL = 'organiser@millbrook-riverside.test';
-
 describe('the desk flow, end to end', () => {
 	let quoteUrl = '';
 	let reference = '';
 
 	it('sales fills the request, sees ranked packages, saves and sends the quote', async () => {
-		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-		await signIn(page, 'sales@kestrel-yard.test');
-		await page.waitForURL(`${BASE_URL}/`);
-		await page.goto(`${BASE_URL}/quotes/new`);
-		await page.getByLabel('Client', { exact: true }).selectOption({ label: 'Millbrook Riverside Food Festival' });
-		await page.getByLabel('Event', { exact: true }).fill('Riverside main stage, browser test');
-		await page.getByLabel('Hire from').fill('2032-07-03');
-		await page.getByLabel('Hire until').fill('2032-07-04');
-		await page.getByLabel(/Level at the position/).fill('95');
-		await page.getByLabel(/Distance from the system to the position/).fill('25');
-		await page.getByText(/packages checked/).waitFor();
+		const page = await openDeskRequest(browser, { event: 'Riverside main stage, browser test', from: '2032-07-03', until: '2032-07-04', levelDb: 95, distanceM: 25 });
 		await page.getByLabel(/There is a limit at a boundary/).check();
 		await page.getByLabel(/Distance from the system/, { exact: false }).last().fill('300');
 		await page.getByLabel(/^Limit/).fill('70');

@@ -1,6 +1,7 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
+import { CLIENT_EMAIL, openDeskRequest } from './desk';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -10,24 +11,12 @@ afterAll(async () => {
 	await browser?.close();
 });
 
-const CLIENT_EMAIL = 'organiser@millbrook-riverside.test';
-
 describe('suggesting a system from stock, end to end', () => {
 	let quoteUrl = '';
 	let systemName = '';
 
 	it('sales asks for suggestions, picks one, and saves and sends the quote with it', async () => {
-		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-		await signIn(page, 'sales@kestrel-yard.test');
-		await page.waitForURL(`${BASE_URL}/`);
-		await page.goto(`${BASE_URL}/quotes/new`);
-		await page.getByLabel('Client', { exact: true }).selectOption({ label: 'Millbrook Riverside Food Festival' });
-		await page.getByLabel('Event', { exact: true }).fill('Riverside talks, suggested system');
-		await page.getByLabel('Hire from').fill('2032-09-03');
-		await page.getByLabel('Hire until').fill('2032-09-04');
-		await page.getByLabel(/Level at the position/).fill('98');
-		await page.getByLabel(/Distance from the system to the position/).fill('30');
-		await page.getByText(/packages checked/).waitFor();
+		const page = await openDeskRequest(browser, { event: 'Riverside talks, suggested system', from: '2032-09-03', until: '2032-09-04', levelDb: 98, distanceM: 30 });
 
 		await page.getByRole('button', { name: 'Suggest systems from stock' }).click();
 		await page.getByText(/^Checked \d+ systems/).waitFor({ timeout: 20_000 });

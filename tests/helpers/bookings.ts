@@ -6,7 +6,7 @@ import { randomInt } from 'node:crypto';
 import { Booking, BookingLine, Quote, StockUnit } from '../../src/lib/server/db/models';
 import { BOOKINGS, CATALOGUE, invalidate } from '../../src/lib/server/cache';
 import { createQuote } from '../../src/lib/server/services/quotes';
-import type { SessionUser } from '../../src/lib/server/users';
+import type { SessionUser } from '../../src/lib/server/auth/signed-in-user';
 import { makeContactUser, makeStaffUser, makeStockedPackage } from './inventory';
 
 export const today = () => new Date().toISOString().slice(0, 10);

@@ -6,7 +6,7 @@
 import { randomUUID } from 'node:crypto';
 import { AmplifierModel, Client, LoudspeakerModel, Package, PackageGroup, StockUnit, User } from '../../src/lib/server/db/models';
 import { hashPassword } from '../../src/lib/server/auth/password';
-import type { SessionUser } from '../../src/lib/server/users';
+import type { SessionUser } from '../../src/lib/server/auth/signed-in-user';
 import { CATALOGUE, invalidate } from '../../src/lib/server/cache';
 
 export async function makeStockedPackage(options: { cabinets?: number; units?: number; amplifierUnits?: number } = {}) {

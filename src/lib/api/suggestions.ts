@@ -1,4 +1,4 @@
-import type { Suggestions } from '$lib/server/services/suggestions';
+import type { Suggestions } from '$lib/systems/present';
 import type { ApiResult } from './evaluations';
 
 export type SuggestionsResponse = Suggestions;

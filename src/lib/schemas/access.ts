@@ -7,7 +7,6 @@ export const linkRequestSchema = z.object({
 	email,
 	redirectTo: z.string().max(500).optional()
 });
-export type LinkRequestInput = z.infer<typeof linkRequestSchema>;
 
 const newPassword = z.string().min(10, 'Use at least 10 characters').max(200, 'At most 200 characters');
 

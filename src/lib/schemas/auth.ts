@@ -5,4 +5,3 @@ export const signInSchema = z.object({
 	password: z.string().min(1, 'Enter your password').max(200),
 	redirectTo: z.string().max(500).optional()
 });
-export type SignInInput = z.infer<typeof signInSchema>;

@@ -11,7 +11,6 @@ export const serialField = z
 	.regex(/^[A-Za-z0-9][A-Za-z0-9._\/-]*$/, 'A serial has letters, digits, dot, slash and hyphen only');
 
 export const scanSchema = z.object({ serial: serialField });
-export type ScanInput = z.output<typeof scanSchema>;
 
 export const modelKeyField = z.string().regex(/^(loudspeaker|amplifier):[1-9]\d{0,9}$/, 'A model like loudspeaker:12 or amplifier:3');
 

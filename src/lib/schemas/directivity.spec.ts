@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fieldErrors } from '$lib/server/http';
+import { fieldErrors } from '$lib/server/services/errors';
 import { bandResponseSchema, compressionSchema, directivitySchema } from './directivity';
 import { loudspeakerSchema } from './inventory-loudspeakers';
 import { packageSchema } from './inventory-packages';

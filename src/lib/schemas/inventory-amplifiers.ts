@@ -38,7 +38,6 @@ export const amplifierSchema = amplifierFields.superRefine(checkAmplifier);
 export type AmplifierInput = z.output<typeof amplifierSchema>;
 
 export const amplifierPatchSchema = patchSchemaOf(amplifierFields);
-export type AmplifierPatch = z.output<typeof amplifierPatchSchema>;
 
 /** The fields the acoustic model reads (AmplifierSpec). */
 export const AMPLIFIER_ACOUSTIC_FIELDS = ['channels', 'powerW8', 'powerW4', 'powerW2', 'minLoadOhm'] as const satisfies readonly (keyof AmplifierInput)[];

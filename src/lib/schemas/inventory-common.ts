@@ -30,8 +30,6 @@ export const minorUnits = z
 
 export const weightKg = measure(0.1, 500, 'kg');
 
-export type FieldErrors = Record<string, string[]>;
-
 /**
  * A PATCH body: any subset of the fields, unknown keys refused. Unlike `.partial()`, a field left out
  * stays out — zod would otherwise fill in its default (null, '') and a PATCH would wipe it.

@@ -62,7 +62,6 @@ export type LoudspeakerInput = z.output<typeof loudspeakerSchema>;
 
 /** An API PATCH body: any subset of fields; the service re-checks the merged result. */
 export const loudspeakerPatchSchema = patchSchemaOf(loudspeakerFields);
-export type LoudspeakerPatch = z.output<typeof loudspeakerPatchSchema>;
 
 /** The fields the acoustic model reads: changing one re-checks open quotes. */
 export const LOUDSPEAKER_ACOUSTIC_FIELDS = [

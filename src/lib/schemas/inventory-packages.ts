@@ -21,7 +21,6 @@ export const packageGroupSchema = z.object({
 	/** The arrangement's own pattern (e.g. cardioid subs), overriding the loudspeaker's table. */
 	directivity: optionalDirectivitySchema
 });
-export type PackageGroupInput = z.output<typeof packageGroupSchema>;
 
 export const packageFields = z.object({
 	name: z.string().trim().min(1, 'Enter a name').max(120, 'At most 120 characters'),

@@ -7,8 +7,6 @@ import { z } from 'zod';
 export const GROUNDS = ['hard', 'mixed', 'porous', 'custom', 'none'] as const;
 export type Ground = (typeof GROUNDS)[number];
 
-export const RECEIVER_BANDS = [63, 125] as const;
-
 const number = (min: number, max: number, what: string) =>
 	z
 		.number({ error: `Enter ${what} as a number` })

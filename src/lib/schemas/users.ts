@@ -1,22 +1,23 @@
 import { z } from 'zod';
 import { ROLES } from '../permissions';
 
+// The fields a new account is made of, shared by the API body and the "add a person" form.
+const email = z.string().trim().toLowerCase().max(254).pipe(z.email('Enter a valid e-mail address'));
+const personName = z.string().trim().min(2, 'Enter the person’s name').max(120);
+const firstPassword = z
+	.string()
+	.max(200)
+	.refine((p) => p === '' || p.length >= 10, 'Use at least 10 characters, or leave empty to generate one')
+	.default('');
+const clientId = z.coerce.number().int().positive().nullable().default(null);
+
+/** A client account belongs to a client organisation. */
+const belongsToClient = (u: { role: string; clientId: number | null }) => u.role !== 'client' || u.clientId !== null;
+const belongsToClientError = { path: ['clientId'], message: 'A client account belongs to a client organisation; choose one' };
+
 export const userCreateSchema = z
-	.object({
-		email: z.string().trim().toLowerCase().max(254).pipe(z.email('Enter a valid e-mail address')),
-		name: z.string().trim().min(2, 'Enter the person’s name').max(120),
-		role: z.enum(ROLES, { error: 'Choose a role' }),
-		password: z
-			.string()
-			.max(200)
-			.refine((p) => p === '' || p.length >= 10, 'Use at least 10 characters, or leave empty to generate one')
-			.default(''),
-		clientId: z.coerce.number().int().positive().nullable().default(null)
-	})
-	.refine((u) => u.role !== 'client' || u.clientId !== null, {
-		path: ['clientId'],
-		message: 'A client account belongs to a client organisation; choose one'
-	});
+	.object({ email, name: personName, role: z.enum(ROLES, { error: 'Choose a role' }), password: firstPassword, clientId })
+	.refine(belongsToClient, belongsToClientError);
 export type UserCreateInput = z.infer<typeof userCreateSchema>;
 
 export const userUpdateSchema = z
@@ -36,17 +37,10 @@ export type UserUpdateInput = z.infer<typeof userUpdateSchema>;
  */
 export const userCreateFormSchema = z
 	.object({
-		email: z.string().trim().toLowerCase().max(254).pipe(z.email('Enter a valid e-mail address')),
-		name: z.string().trim().min(2, 'Enter the person’s name').max(120),
+		email,
+		name: personName,
 		role: z.enum(['', ...ROLES]).default('').refine((r) => r !== '', 'Choose a role'),
-		password: z
-			.string()
-			.max(200)
-			.refine((p) => p === '' || p.length >= 10, 'Use at least 10 characters, or leave empty to generate one')
-			.default(''),
-		clientId: z.coerce.number().int().positive().nullable().default(null)
+		password: firstPassword,
+		clientId
 	})
-	.refine((u) => u.role !== 'client' || u.clientId !== null, {
-		path: ['clientId'],
-		message: 'A client account belongs to a client organisation; choose one'
-	});
+	.refine(belongsToClient, belongsToClientError);

@@ -4,6 +4,16 @@ import { evaluateOne, type EvaluationContext, type PackageResult } from '../quot
 import type { LoadedGroup, LoadedPackage } from '../inventory';
 import type { Candidate, Obstacles } from './search';
 
+/** The answer to a search: systems that clear the limits, the closest ones if none does, and why. */
+export interface Suggestions {
+	systems: SuggestedSystem[];
+	closest: SuggestedSystem[];
+	complete: boolean;
+	evaluated: number;
+	obstacles: string[];
+	currency: string;
+}
+
 export interface SystemGroup {
 	loudspeakerModelId: number;
 	loudspeakerName: string;

@@ -1,6 +1,6 @@
 import { error, redirect } from '@sveltejs/kit';
 import { can, type Capability } from '$lib/permissions';
-import type { SessionUser } from '../users';
+import type { SessionUser } from './signed-in-user';
 
 type GuardEvent = { locals: Pick<App.Locals, 'user'>; url: URL };
 

@@ -7,7 +7,7 @@ import { Op } from 'sequelize';
 import { db, PasswordReset, User } from '../db';
 import { hashPassword } from './password';
 import { endSessions } from '../services/users';
-import { userChanged } from '../users';
+import { userChanged } from './signed-in-user';
 
 export const RESET_VALID_MINUTES = 60;
 const hash = (token: string) => createHash('sha256').update(token).digest('hex');

@@ -6,8 +6,8 @@
 import type { Cookies } from '@sveltejs/kit';
 import { decode, encode } from '@auth/core/jwt';
 import { env } from '$env/dynamic/private';
+import { SESSION_COOKIES } from './signed-in-user';
 
-const SESSION_COOKIES = ['__Secure-authjs.session-token', 'authjs.session-token'] as const;
 /** The same lifetime the Auth.js configuration gives sessions (src/auth.ts). */
 const MAX_AGE_S = 12 * 60 * 60;
 

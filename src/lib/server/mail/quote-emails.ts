@@ -1,7 +1,7 @@
 import { formatMoney } from '$lib/quotes/pricing';
 import { boundarySentence, CLIENT_CAUTIONS, headroomSentence, levelPromise, limitsSentence, moneyLines, receiverLines, siteSentence } from '$lib/quotes/plain-language';
 import { OUTCOME_WORDS } from '$lib/quotes/outcome';
-import type { QuoteDetail } from '../services/quotes';
+import type { QuoteDetail } from '$lib/quotes/types';
 import type { EmailMessage } from './outbox';
 import { publicOrigin } from './transport';
 

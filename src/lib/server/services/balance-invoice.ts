@@ -2,10 +2,11 @@
 import { db, Client, Invoice, OutboundEmail, Quote } from '../db';
 import { deliver, queueEmail } from '../mail/outbox';
 import { invoiceEmail } from '../mail/payment-emails';
-import type { SessionUser } from '../users';
+import type { SessionUser } from '../auth/signed-in-user';
 import { DomainError } from './errors';
 import { issueStripeInvoice, saveIssuedInvoice, voidOrphanInvoice } from './invoices';
-import { getQuote, type QuoteDetail } from './quotes';
+import type { QuoteDetail } from '$lib/quotes/types';
+import { getQuote } from './quotes';
 import { getSettings } from './settings';
 
 /**

@@ -4,7 +4,7 @@ import { closeRefusal, progressInWords, type BookingState } from '$lib/bookings/
 import { quoteReference } from '$lib/quotes/reference';
 import { AmplifierModel, Booking, BookingEvent, BookingUnit, Client, LoudspeakerModel, Quote, QuoteVersion, StockUnit, User } from '../db';
 import { BOOKINGS, invalidate } from '../cache';
-import type { SessionUser } from '../users';
+import type { SessionUser } from '../auth/signed-in-user';
 import { DomainError } from './errors';
 import { bookingSummary, getPickList } from './pick-lists';
 

@@ -12,7 +12,7 @@ import { HOLDING_STATES, stateAfterScan, type BookingState } from '$lib/bookings
 import { quoteReference } from '$lib/quotes/reference';
 import { db, AmplifierModel, Booking, BookingEvent, BookingLine, BookingUnit, LoudspeakerModel, StockUnit } from '../db';
 import { BOOKINGS, CATALOGUE, invalidate } from '../cache';
-import type { SessionUser } from '../users';
+import type { SessionUser } from '../auth/signed-in-user';
 import { DomainError } from './errors';
 import { testIntervals } from './safety-tests';
 

@@ -4,7 +4,7 @@ import { Invoice } from '../db';
 import { cancellationEmail } from '../mail/payment-emails';
 import { stripe } from '../payments/stripe-client';
 import { viaStripe } from './invoices';
-import type { QuoteDetail } from './quotes';
+import type { QuoteDetail } from '$lib/quotes/types';
 import { getSettings } from './settings';
 
 export async function cancelMoney(quote: QuoteDetail) {

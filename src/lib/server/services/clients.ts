@@ -8,7 +8,7 @@ import type { QuoteStatus } from '$lib/quotes/states';
 import type { ClientInput, ClientUpdateInput, ContactInput } from '$lib/schemas/clients';
 import { hashPassword } from '../auth/password';
 import { db, Booking, Client, ClientChange, Quote, QuoteVersion, User } from '../db';
-import { userChanged, type SessionUser } from '../users';
+import { userChanged, type SessionUser } from '../auth/signed-in-user';
 import { DomainError } from './errors';
 
 export interface ClientSummary {

@@ -5,7 +5,7 @@
  */
 import { AmplifierModel, BookingUnit, DamageReport, LoudspeakerModel, Repair, StockUnit, User } from '../db';
 import { CATALOGUE, invalidate } from '../cache';
-import type { SessionUser } from '../users';
+import type { SessionUser } from '../auth/signed-in-user';
 import { DomainError } from './errors';
 import { readStoredFile, removeStoredFiles, storeFile } from './inventory-attachments';
 import { safeOriginalName, sniffMimeType, uploadProblem } from './upload-checks';

@@ -4,11 +4,12 @@ import { can } from '$lib/permissions';
 import { quoteReference } from '$lib/quotes/reference';
 import type { ClientResponse } from '$lib/quotes/states';
 import { Quote, StockUnit } from '../db';
-import type { SessionUser } from '../users';
+import type { SessionUser } from '../auth/signed-in-user';
 import { lateUnits, type LateUnit } from './booking-life';
 import { listBookings, type BookingSummary } from './pick-lists';
 import { unitsDueForTest } from './safety-tests';
-import { listQuotes, type QuoteSummary } from './quotes';
+import type { QuoteSummary } from '$lib/quotes/types';
+import { listQuotes } from './quotes';
 import { recentDeskNotices, type DeskNoticeRow } from './desk-notices';
 
 export interface Overview {

@@ -1,4 +1,4 @@
-import { error } from '@sveltejs/kit';
+import type { z } from 'zod';
 
 /** A rule of the business that refused a request; routes turn it into the matching HTTP answer. */
 export class DomainError extends Error {
@@ -11,12 +11,12 @@ export class DomainError extends Error {
 	}
 }
 
-/** Runs a service call and maps a DomainError to SvelteKit's error(), keeping one envelope. */
-export async function orHttpError<T>(work: () => Promise<T>): Promise<T> {
-	try {
-		return await work();
-	} catch (err) {
-		if (err instanceof DomainError) error(err.status, { message: err.message, errors: err.errors });
-		throw err;
+/** Field errors in the one envelope every API route answers with: { message, errors: { field: [..] } }. */
+export function fieldErrors(issues: z.core.$ZodIssue[]): Record<string, string[]> {
+	const errors: Record<string, string[]> = {};
+	for (const issue of issues) {
+		const key = issue.path.length ? issue.path.join('.') : '_';
+		(errors[key] ??= []).push(issue.message);
 	}
+	return errors;
 }

@@ -1,9 +1,8 @@
 import { ForeignKeyConstraintError, UniqueConstraintError, type Model, type Transaction } from 'sequelize';
 import type { z } from 'zod';
-import { fieldErrors } from '../http';
 import { AmplifierModel, LoudspeakerModel } from '../db/models';
 import { bumpStamp } from '../cache-stamps';
-import { DomainError } from './errors';
+import { DomainError, fieldErrors } from './errors';
 import type { ModelType } from '$lib/inventory/types';
 
 /**

@@ -1,4 +1,3 @@
-import type { HistoryModelType } from '$lib/inventory/types';
 import { amplifiers } from './inventory-amplifiers';
 import { loudspeakers } from './inventory-loudspeakers';
 import { createPackage, deletePackage, getPackage, listPackages, updatePackage } from './inventory-packages';
@@ -9,4 +8,3 @@ export const packages = { list: listPackages, get: getPackage, create: createPac
 export const stockUnits = { list: listStockUnits, get: getStockUnit, create: createStockUnit, update: updateStockUnit, remove: deleteStockUnit };
 export { amplifiers, loudspeakers };
 
-export const HISTORY_TYPES = { loudspeakers: 'loudspeaker', amplifiers: 'amplifier', packages: 'package', units: 'unit' } as const satisfies Record<string, HistoryModelType>;

@@ -102,8 +102,6 @@ export function specModelService<S extends z.ZodType>(config: SpecModelConfig<S>
 	return { modelType, fields, list, get, findByNameAndMaker, create, update, remove };
 }
 
-export type SpecModelService = ReturnType<typeof specModelService>;
-
 function pick(source: Record<string, unknown>, keys: readonly string[]): Record<string, unknown> {
 	return Object.fromEntries(keys.filter((k) => k in source).map((k) => [k, source[k]]));
 }

@@ -1,18 +1,5 @@
+import type { InvoiceRow } from '$lib/quotes/types';
 import { Invoice } from '../db';
-
-export interface InvoiceRow {
-	id: number;
-	kind: 'deposit' | 'balance';
-	number: string | null;
-	status: 'open' | 'paid' | 'void';
-	amountMinor: number;
-	taxMinor: number;
-	refundedMinor: number;
-	currency: string;
-	hostedUrl: string | null;
-	lastPaymentError: string | null;
-	paidAt: string | null;
-}
 
 export function toInvoiceRow(i: Invoice): InvoiceRow {
 	return {

@@ -10,7 +10,7 @@ import { isPaymentServiceDown, stripe } from '../payments/stripe-client';
 import { DomainError } from './errors';
 import { quoteReference } from '$lib/quotes/reference';
 import { chargeTooLarge } from '$lib/quotes/hire-limits';
-import type { QuoteDetail } from './quotes';
+import type { QuoteDetail } from '$lib/quotes/types';
 import { getSettings } from './settings';
 
 export const PAYMENT_SERVICE_DOWN =

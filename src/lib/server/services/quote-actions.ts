@@ -7,13 +7,14 @@ import { deliver, queueEmail } from '../mail/outbox';
 import { invoiceEmail } from '../mail/payment-emails';
 import { quoteSentEmail } from '../mail/quote-emails';
 import { contactAccountFor, createSignInLink } from '../auth/sign-in-links';
-import type { SessionUser } from '../users';
+import type { SessionUser } from '../auth/signed-in-user';
 import { cancelMoney } from './cancellation';
 import { noteForDesk } from './desk-notices';
 import { DomainError } from './errors';
 import { issueStripeInvoice, saveIssuedInvoice, voidOrphanInvoice, type IssuedInvoice } from './invoices';
 import { quoteDocumentFor } from './quote-document';
-import { getQuote, type QuoteDetail } from './quotes';
+import type { QuoteDetail } from '$lib/quotes/types';
+import { getQuote } from './quotes';
 import { releaseBooking, shortfallsNow } from './bookings';
 import { getSettings, type Settings } from './settings';
 

@@ -3,10 +3,11 @@ import { quoteDocument, type QuoteDocument } from '$lib/quotes/document';
 import { Client } from '../db';
 import { renderQuotePdf } from '../documents/quote-pdf';
 import type { MailAttachment } from '../mail/outbox';
-import type { SessionUser } from '../users';
+import type { SessionUser } from '../auth/signed-in-user';
 import { readLogo } from './company-logo';
 import { termsFor } from './quote-actions';
-import { getQuote, type QuoteDetail } from './quotes';
+import type { QuoteDetail } from '$lib/quotes/types';
+import { getQuote } from './quotes';
 import { getSettings } from './settings';
 
 /** The document as it stands now; `validUntil` overrides the stored day (the send step stamps it). */

@@ -12,57 +12,12 @@ import { MAX_CHARGE_MINOR, chargeTooLarge } from '$lib/quotes/hire-limits';
 import { formatMoney } from '$lib/quotes/pricing';
 import { db, Client, OutboundEmail, Quote, QuoteVersion, User } from '../db';
 import { STAFF_EMAIL_REFUSED } from '../auth/sign-in-links';
-import { invoicesFor, type InvoiceRow } from './invoice-rows';
-import type { SessionUser } from '../users';
+import type { QuoteDetail, QuoteSummary } from '$lib/quotes/types';
+import { invoicesFor } from './invoice-rows';
+import { ownClientId, type SessionUser } from '../auth/signed-in-user';
 import { DomainError } from './errors';
 import { evaluateForDesk } from './evaluations';
 import { loadSystem } from './systems';
-import type { SystemInput } from '$lib/schemas/systems';
-
-export interface QuoteSummary {
-	id: number;
-	reference: string;
-	eventName: string;
-	status: QuoteStatus;
-	clientId: number;
-	clientName: string;
-	startDate: string;
-	endDate: string;
-	packageName: string;
-	verdict: string;
-	/** Clear, tight, over the limit or short: what every list and badge shows. */
-	outcome: Outcome;
-	totalMinor: number;
-	currency: string;
-	needsRecheck: boolean;
-	/** The client's answer that handed the quote back to the desk (declined or asked for a change). */
-	clientResponse: ClientResponse | null;
-	updatedAt: string;
-}
-
-export interface QuoteDetail extends QuoteSummary {
-	version: number;
-	request: QuoteRequestInput;
-	result: PackageResult;
-	/** The copy of the site this version was evaluated with; null without a site. */
-	site: SiteSnapshot | null;
-	/** The composed or suggested system this version offers; null when it offers a package. */
-	system: SystemInput | null;
-	notes: string | null;
-	recheckReason: string | null;
-	versions: { version: number; createdAt: string; packageName: string; totalMinor: number }[];
-	emails: { id: number; toAddress: string; subject: string; status: string; createdAt: string; lastError: string | null }[];
-	sentAt: string | null;
-	acceptedAt: string | null;
-	invoices: InvoiceRow[];
-	/** Set when a paid deposit could not become a booking: the desk must act. */
-	bookingIssue: string | null;
-	/** The last day it may be accepted (set when sent). */
-	validUntil: string | null;
-	acceptance: { byName: string; at: string; terms: string[] } | null;
-	clientMessage: string | null;
-	respondedAt: string | null;
-}
 
 interface Snapshot {
 	result: PackageResult;
@@ -167,7 +122,7 @@ async function writeVersion(
 /** Clients see only their organisation's quotes; anyone else's is reported as not found. */
 function visibleTo(actor: SessionUser): { clientId?: number } {
 	if (actor.role !== 'client') return {};
-	return { clientId: actor.clientId ?? -1 };
+	return { clientId: ownClientId(actor) };
 }
 
 function summaryOf(quote: Quote & { client?: Client; versions?: QuoteVersion[] }): QuoteSummary {

@@ -7,7 +7,7 @@ import type { QuoteRequestInput } from '$lib/schemas/evaluation';
 import { reservedOn, type ModelKey } from '$lib/quotes/availability';
 import { toModelRequest } from '$lib/quotes/request';
 import { searchSystems, type SearchResult, type StockCatalogue } from '$lib/systems';
-import { obstacleLines, presentSystems, type SuggestedSystem } from '$lib/systems/present';
+import { obstacleLines, presentSystems, type Suggestions } from '$lib/systems/present';
 import { BOOKINGS, CATALOGUE, cached } from '../cache';
 import { reservationsOverlapping, unitsInService } from './catalogue';
 import { DomainError } from './errors';
@@ -16,15 +16,6 @@ import { amplifiers } from './inventory-amplifiers';
 import { loudspeakers } from './inventory-loudspeakers';
 import { findProgramme, toProgramme } from './programmes';
 import { getSettings, priceSettingsOf } from './settings';
-
-export interface Suggestions {
-	systems: SuggestedSystem[];
-	closest: SuggestedSystem[];
-	complete: boolean;
-	evaluated: number;
-	obstacles: string[];
-	currency: string;
-}
 
 /** How long one slice of the search runs before it lets other requests in. */
 const SLICE_MS = 8;

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { uniqueEmail, useTestDatabase } from '../../../../tests/helpers/db';
 import { Client } from '../db/models';
-import { findActiveUser } from '../users';
+import { findActiveUser } from '../auth/signed-in-user';
 import { DomainError } from './errors';
 import { createUser, endSessions, updateUser } from './users';
 

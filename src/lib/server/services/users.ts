@@ -1,23 +1,11 @@
 import { randomBytes } from 'node:crypto';
 import { UniqueConstraintError } from 'sequelize';
-import type { Role } from '$lib/permissions';
 import type { UserCreateInput, UserUpdateInput } from '$lib/schemas/users';
 import { hashPassword, verifyPassword } from '../auth/password';
 import { Client, User } from '../db/models';
-import { userChanged } from '../users';
+import { userChanged } from '../auth/signed-in-user';
+import type { UserRow } from '$lib/users/types';
 import { DomainError } from './errors';
-
-export interface UserRow {
-	id: number;
-	email: string;
-	name: string;
-	role: Role;
-	active: boolean;
-	clientId: number | null;
-	clientName: string | null;
-	lastSignInAt: string | null;
-	createdAt: string;
-}
 
 function toRow(user: User & { client?: Client | null }): UserRow {
 	return {

@@ -2,9 +2,9 @@ import { json } from '@sveltejs/kit';
 import type { ModelKey } from '$lib/quotes/availability';
 import { availabilityQuerySchema } from '$lib/schemas/bookings';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseQuery } from '$lib/server/http';
+import { parseQuery } from '$lib/server/http/parse';
 import { calendarModels, modelCalendar } from '$lib/server/services/availability-calendar';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import type { RequestHandler } from './$types';
 
 /** ?from&to (yyyy-mm-dd, at most 53 weeks) and optionally model=loudspeaker:12: week-by-week stock per model. */

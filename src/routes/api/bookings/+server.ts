@@ -2,7 +2,8 @@ import { json } from '@sveltejs/kit';
 import { can } from '$lib/permissions';
 import { bookingListQuerySchema } from '$lib/schemas/bookings';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseQuery } from '$lib/server/http';
+import { ownClientId } from '$lib/server/auth/signed-in-user';
+import { parseQuery } from '$lib/server/http/parse';
 import { allBookings } from '$lib/server/services/pick-lists';
 import type { RequestHandler } from './$types';
 
@@ -11,6 +12,6 @@ export const GET: RequestHandler = async (event) => {
 	const user = requireCapability(event, 'bookings:read', 'bookings:read-own');
 	const { state } = parseQuery(event.url, bookingListQuerySchema);
 	const staff = can(user.role, 'bookings:read');
-	const list = await allBookings({ state, clientId: staff ? undefined : (user.clientId ?? -1) });
+	const list = await allBookings({ state, clientId: staff ? undefined : ownClientId(user) });
 	return json(staff ? list : list.map(({ id, reference, eventName, startDate, endDate, state, stateWords }) => ({ id, reference, eventName, startDate, endDate, state, stateWords })));
 };

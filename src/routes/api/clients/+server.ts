@@ -1,9 +1,9 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseJsonBody } from '$lib/server/http';
+import { parseJsonBody } from '$lib/server/http/parse';
 import { clientSchema } from '$lib/schemas/clients';
 import { createClient, listClients } from '$lib/server/services/clients';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import type { RequestHandler } from './$types';
 
 export const GET: RequestHandler = async (event) => {

@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseJsonBody } from '$lib/server/http';
+import { parseJsonBody } from '$lib/server/http/parse';
 import { quoteRequestWithSystemSchema } from '$lib/schemas/systems';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import { evaluateForDesk } from '$lib/server/services/evaluations';
 import { loadSystem } from '$lib/server/services/systems';
 import type { RequestHandler } from './$types';

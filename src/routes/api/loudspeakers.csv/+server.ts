@@ -1,5 +1,5 @@
 import { requireCapability } from '$lib/server/auth/guards';
-import { csvResponse } from '$lib/server/inventory-http';
+import { csvResponse } from '$lib/server/http/inventory-files';
 import { exportModelsCsv } from '$lib/server/services/inventory-csv';
 import type { RequestHandler } from './$types';
 

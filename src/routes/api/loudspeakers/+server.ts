@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { loudspeakerSchema } from '$lib/schemas/inventory-loudspeakers';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseJsonBody } from '$lib/server/http';
-import { orHttpError } from '$lib/server/services/errors';
+import { parseJsonBody } from '$lib/server/http/parse';
+import { orHttpError } from '$lib/server/http/errors';
 import { loudspeakers } from '$lib/server/services/inventory-loudspeakers';
 import type { RequestHandler } from './$types';
 

@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
-import { parseJsonBody } from '$lib/server/http';
+import { parseJsonBody } from '$lib/server/http/parse';
 import { linkRequestSchema } from '$lib/schemas/access';
 import { requestPasswordReset } from '$lib/server/services/access';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import type { RequestHandler } from './$types';
 
 /** { email } → 202 whatever the address; an active account gets a one-time reset link. Open to everyone. */

@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseJsonBody } from '$lib/server/http';
+import { parseJsonBody } from '$lib/server/http/parse';
 import { quoteCreateSchema } from '$lib/schemas/quotes';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import { createQuote, listQuotes } from '$lib/server/services/quotes';
 import type { RequestHandler } from './$types';
 

@@ -6,7 +6,8 @@ import { requireCapability } from '$lib/server/auth/guards';
 import { bookingLog, closeBooking, setSiteAddress } from '$lib/server/services/booking-life';
 import { dispatchUnit, returnUnit } from '$lib/server/services/booking-scans';
 import { reportDamage } from '$lib/server/services/damage-repairs';
-import { DomainError, orHttpError } from '$lib/server/services/errors';
+import { DomainError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import { assignUnits, getPickList } from '$lib/server/services/pick-lists';
 import type { Actions, PageServerLoad } from './$types';
 

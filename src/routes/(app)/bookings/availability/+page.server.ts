@@ -5,7 +5,7 @@ import type { ModelKey } from '$lib/quotes/availability';
 import { modelKeyField } from '$lib/schemas/bookings';
 import { requireCapability } from '$lib/server/auth/guards';
 import { calendarModels, modelCalendar } from '$lib/server/services/availability-calendar';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import type { PageServerLoad } from './$types';
 
 const WEEKS = 12;

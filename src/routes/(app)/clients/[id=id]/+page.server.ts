@@ -5,7 +5,8 @@ import { can } from '$lib/permissions';
 import { clientSchema, contactSchema, contactUpdateSchema } from '$lib/schemas/clients';
 import { requireCapability } from '$lib/server/auth/guards';
 import { addContact, getClient, updateClient, updateContact } from '$lib/server/services/clients';
-import { DomainError, orHttpError } from '$lib/server/services/errors';
+import { DomainError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {

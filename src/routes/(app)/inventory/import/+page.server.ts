@@ -1,6 +1,6 @@
 import { fail } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { readImportForm } from '$lib/server/inventory-pages';
+import { readImportForm } from '$lib/server/http/inventory-pages';
 import { DomainError } from '$lib/server/services/errors';
 import { applyImport, previewImport } from '$lib/server/services/inventory-csv';
 import type { Actions, PageServerLoad } from './$types';

@@ -2,7 +2,7 @@ import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireCapability } from '$lib/server/auth/guards';
 import { quoteBodyFromForm, quoteCreateSchema, quoteRequestFormSchema } from '$lib/schemas/quotes';
-import { quoteRequestFormOptions, saveFromForm } from '$lib/server/services/quote-form';
+import { quoteRequestFormOptions, saveFromForm } from '$lib/server/http/quote-form';
 import { createQuote } from '$lib/server/services/quotes';
 import type { Actions, PageServerLoad } from './$types';
 

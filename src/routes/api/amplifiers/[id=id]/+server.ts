@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { amplifierPatchSchema } from '$lib/schemas/inventory-amplifiers';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseJsonBody } from '$lib/server/http';
-import { orHttpError } from '$lib/server/services/errors';
+import { parseJsonBody } from '$lib/server/http/parse';
+import { orHttpError } from '$lib/server/http/errors';
 import { amplifiers } from '$lib/server/services/inventory-amplifiers';
 import type { RequestHandler } from './$types';
 

@@ -1,6 +1,6 @@
 import { requireCapability } from '$lib/server/auth/guards';
-import { attachmentResponse } from '$lib/server/inventory-http';
-import { orHttpError } from '$lib/server/services/errors';
+import { attachmentResponse } from '$lib/server/http/inventory-files';
+import { orHttpError } from '$lib/server/http/errors';
 import { deleteAttachment, readAttachment } from '$lib/server/services/inventory-attachments';
 import type { RequestHandler } from './$types';
 

@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { readCsvBody } from '$lib/server/inventory-http';
-import { orHttpError } from '$lib/server/services/errors';
+import { readCsvBody } from '$lib/server/http/inventory-files';
+import { orHttpError } from '$lib/server/http/errors';
 import { applyImport, previewImport } from '$lib/server/services/inventory-csv';
 import type { RequestHandler } from './$types';
 

@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseJsonBody } from '$lib/server/http';
+import { parseJsonBody } from '$lib/server/http/parse';
 import { siteSchema, siteUpdateSchema } from '$lib/schemas/sites';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import { deleteSite, getSite, updateSite } from '$lib/server/services/sites';
 import type { RequestHandler } from './$types';
 

@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { stockUnitPatchSchema } from '$lib/schemas/inventory-units';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseJsonBody } from '$lib/server/http';
-import { orHttpError } from '$lib/server/services/errors';
+import { parseJsonBody } from '$lib/server/http/parse';
+import { orHttpError } from '$lib/server/http/errors';
 import { stockUnits } from '$lib/server/services/inventory-resources';
 import type { RequestHandler } from './$types';
 

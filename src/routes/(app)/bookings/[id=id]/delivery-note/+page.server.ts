@@ -1,6 +1,6 @@
 import { requireCapability } from '$lib/server/auth/guards';
 import { deliveryNote } from '$lib/server/services/booking-life';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import { getSettings } from '$lib/server/services/settings';
 import type { PageServerLoad } from './$types';
 

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { ModelKey } from '$lib/quotes/availability';
 import { modelKeyField } from '$lib/schemas/bookings';
 import { requireCapability } from '$lib/server/auth/guards';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import { labelsForBooking, labelsForModel } from '$lib/server/services/unit-labels';
 import type { PageServerLoad } from './$types';
 

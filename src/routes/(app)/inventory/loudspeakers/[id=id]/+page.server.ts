@@ -1,6 +1,6 @@
 import { requireCapability } from '$lib/server/auth/guards';
-import { deleteOrExplain, modelDetail, removeAttachmentFromForm, uploadFromForm } from '$lib/server/inventory-pages';
-import { orHttpError } from '$lib/server/services/errors';
+import { deleteOrExplain, modelDetail, removeAttachmentFromForm, uploadFromForm } from '$lib/server/http/inventory-pages';
+import { orHttpError } from '$lib/server/http/errors';
 import { loudspeakers } from '$lib/server/services/inventory-loudspeakers';
 import type { Actions, PageServerLoad } from './$types';
 

@@ -3,7 +3,7 @@ import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { loudspeakerSchema } from '$lib/schemas/inventory-loudspeakers';
 import { requireCapability } from '$lib/server/auth/guards';
-import { refusal } from '$lib/server/inventory-pages';
+import { refusal } from '$lib/server/http/inventory-pages';
 import { loudspeakers } from '$lib/server/services/inventory-loudspeakers';
 import type { Actions, PageServerLoad } from './$types';
 

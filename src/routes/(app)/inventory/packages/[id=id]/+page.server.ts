@@ -1,8 +1,8 @@
 import { packageBillOfMaterials } from '$lib/inventory/bill-of-materials';
 import { channelLoadOhm } from '$lib/inventory/channel-plan';
 import { requireCapability } from '$lib/server/auth/guards';
-import { deleteOrExplain } from '$lib/server/inventory-pages';
-import { orHttpError } from '$lib/server/services/errors';
+import { deleteOrExplain } from '$lib/server/http/inventory-pages';
+import { orHttpError } from '$lib/server/http/errors';
 import { listHistory } from '$lib/server/services/inventory-history';
 import { deletePackage, getLoadedPackage } from '$lib/server/services/inventory-packages';
 import type { Actions, PageServerLoad } from './$types';

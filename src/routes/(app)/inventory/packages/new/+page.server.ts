@@ -3,7 +3,7 @@ import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { packageSchema } from '$lib/schemas/inventory-packages';
 import { requireCapability } from '$lib/server/auth/guards';
-import { packageFormOptions, refusal } from '$lib/server/inventory-pages';
+import { packageFormOptions, refusal } from '$lib/server/http/inventory-pages';
 import { createPackage } from '$lib/server/services/inventory-packages';
 import type { Actions, PageServerLoad } from './$types';
 

@@ -3,7 +3,7 @@ import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { stockUnitSchema } from '$lib/schemas/inventory-units';
 import { requireCapability } from '$lib/server/auth/guards';
-import { refusal, unitFormOptions } from '$lib/server/inventory-pages';
+import { refusal, unitFormOptions } from '$lib/server/http/inventory-pages';
 import { createStockUnit } from '$lib/server/services/inventory-units';
 import type { Actions, PageServerLoad } from './$types';
 

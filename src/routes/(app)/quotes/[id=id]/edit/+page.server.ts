@@ -4,8 +4,8 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { isEditable } from '$lib/quotes/states';
 import { requireCapability } from '$lib/server/auth/guards';
 import { evaluationBodyFromForm, formFromRequest, quoteBodyFromForm, quoteReviseSchema, quoteRequestFormSchema } from '$lib/schemas/quotes';
-import { orHttpError } from '$lib/server/services/errors';
-import { quoteRequestFormOptions, saveFromForm } from '$lib/server/services/quote-form';
+import { orHttpError } from '$lib/server/http/errors';
+import { quoteRequestFormOptions, saveFromForm } from '$lib/server/http/quote-form';
 import { getQuote, reviseQuote } from '$lib/server/services/quotes';
 import type { Actions, PageServerLoad } from './$types';
 

@@ -1,5 +1,5 @@
 import { requireCapability } from '$lib/server/auth/guards';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import { documentContentFor } from '$lib/server/services/quote-document';
 import { getSettings } from '$lib/server/services/settings';
 import type { PageServerLoad } from './$types';

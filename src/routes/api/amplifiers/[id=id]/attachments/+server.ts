@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { readAttachmentUpload } from '$lib/server/inventory-http';
-import { orHttpError } from '$lib/server/services/errors';
+import { readAttachmentUpload } from '$lib/server/http/inventory-files';
+import { orHttpError } from '$lib/server/http/errors';
 import { listAttachments, saveAttachment } from '$lib/server/services/inventory-attachments';
 import type { RequestHandler } from './$types';
 

@@ -1,6 +1,6 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import { listHistory } from '$lib/server/services/inventory-history';
 import { amplifiers } from '$lib/server/services/inventory-amplifiers';
 import type { RequestHandler } from './$types';

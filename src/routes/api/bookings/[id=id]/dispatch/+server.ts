@@ -1,9 +1,9 @@
 import { json } from '@sveltejs/kit';
 import { scanSchema } from '$lib/schemas/bookings';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseJsonBody } from '$lib/server/http';
+import { parseJsonBody } from '$lib/server/http/parse';
 import { dispatchUnit } from '$lib/server/services/booking-scans';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import type { RequestHandler } from './$types';
 
 /** One scanned label going out: { serial }. 409 with the reason when the unit may not go. */

@@ -1,6 +1,6 @@
 import { requireCapability } from '$lib/server/auth/guards';
 import { damagePhoto } from '$lib/server/services/damage-repairs';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import type { RequestHandler } from './$types';
 
 /** The damage photo, served only to staff; never inline HTML, never sniffed by the browser. */

@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { csvResponse, readCsvBody } from '$lib/server/inventory-http';
-import { orHttpError } from '$lib/server/services/errors';
+import { csvResponse, readCsvBody } from '$lib/server/http/inventory-files';
+import { orHttpError } from '$lib/server/http/errors';
 import { loudspeakers } from '$lib/server/services/inventory-loudspeakers';
 import { applyDirectivityImport, exportDirectivityCsv, previewDirectivityImport } from '$lib/server/services/inventory-directivity';
 import type { RequestHandler } from './$types';

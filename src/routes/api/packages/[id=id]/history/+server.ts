@@ -1,6 +1,6 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import { listHistory } from '$lib/server/services/inventory-history';
 import { packages } from '$lib/server/services/inventory-resources';
 import type { RequestHandler } from './$types';

@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseJsonBody } from '$lib/server/http';
+import { parseJsonBody } from '$lib/server/http/parse';
 import { quoteActionSchema } from '$lib/schemas/quotes';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import { applyQuoteAction } from '$lib/server/services/quote-actions';
 import type { RequestHandler } from './$types';
 

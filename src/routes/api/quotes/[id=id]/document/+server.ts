@@ -1,5 +1,5 @@
 import { requireCapability } from '$lib/server/auth/guards';
-import { orHttpError } from '$lib/server/services/errors';
+import { orHttpError } from '$lib/server/http/errors';
 import { quotePdf } from '$lib/server/services/quote-document';
 import type { RequestHandler } from './$types';
 

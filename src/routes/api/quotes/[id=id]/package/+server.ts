@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { promoteSchema } from '$lib/schemas/systems';
 import { requireCapability } from '$lib/server/auth/guards';
-import { parseJsonBody } from '$lib/server/http';
-import { orHttpError } from '$lib/server/services/errors';
+import { parseJsonBody } from '$lib/server/http/parse';
+import { orHttpError } from '$lib/server/http/errors';
 import { promoteSystem } from '$lib/server/services/package-promotion';
 import type { RequestHandler } from './$types';
 

@@ -3,8 +3,8 @@ import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { amplifierSchema } from '$lib/schemas/inventory-amplifiers';
 import { requireCapability } from '$lib/server/auth/guards';
-import { refusal } from '$lib/server/inventory-pages';
-import { orHttpError } from '$lib/server/services/errors';
+import { refusal } from '$lib/server/http/inventory-pages';
+import { orHttpError } from '$lib/server/http/errors';
 import { amplifiers } from '$lib/server/services/inventory-amplifiers';
 import type { Actions, PageServerLoad } from './$types';
 

@@ -3,8 +3,8 @@ import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { packageSchema } from '$lib/schemas/inventory-packages';
 import { requireCapability } from '$lib/server/auth/guards';
-import { packageFormOptions, refusal } from '$lib/server/inventory-pages';
-import { orHttpError } from '$lib/server/services/errors';
+import { packageFormOptions, refusal } from '$lib/server/http/inventory-pages';
+import { orHttpError } from '$lib/server/http/errors';
 import { getPackage, updatePackage } from '$lib/server/services/inventory-packages';
 import type { Actions, PageServerLoad } from './$types';
 

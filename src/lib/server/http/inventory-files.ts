@@ -1,7 +1,7 @@
 import { error } from '@sveltejs/kit';
 import type { AttachmentRow } from '$lib/inventory/types';
-import { MAX_CSV_BYTES } from './services/inventory-csv';
-import { UPLOAD_LIMITS, type AttachmentKind } from './services/upload-checks';
+import { MAX_CSV_BYTES } from '../services/inventory-csv';
+import { UPLOAD_LIMITS, type AttachmentKind } from '../services/upload-checks';
 
 function tooLarge(request: Request, maxBytes: number): boolean {
 	return Number(request.headers.get('content-length') ?? 0) > maxBytes;

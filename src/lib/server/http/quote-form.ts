@@ -6,12 +6,11 @@ import type { z } from 'zod';
 import { formFieldOf, quoteRequestFormSchema, type QuoteRequestForm } from '$lib/schemas/quotes';
 import { composedFrom } from '$lib/systems/compose';
 import { AmplifierModel, Client, LoudspeakerModel } from '../db';
-import { loadedPackages } from './catalogue';
-import type { SessionUser } from '../users';
-import { DomainError } from './errors';
-import { listProgrammes } from './programmes';
-import { getSettings } from './settings';
-import { listSites } from './sites';
+import { loadedPackages } from '../services/catalogue';
+import { DomainError } from '../services/errors';
+import { listProgrammes } from '../services/programmes';
+import { getSettings } from '../services/settings';
+import { listSites } from '../services/sites';
 
 export async function quoteRequestFormOptions() {
 	const [clients, programmes, settings, sites, composer] = await Promise.all([
@@ -72,5 +71,3 @@ export async function saveFromForm<S extends z.ZodType>(
 	}
 	redirect(303, `/quotes/${id}`);
 }
-
-export type { SessionUser };

@@ -1,15 +1,6 @@
 import { error } from '@sveltejs/kit';
-import { z } from 'zod';
-
-/** Field errors in the one envelope every API route answers with: { message, errors: { field: [..] } }. */
-export function fieldErrors(issues: z.core.$ZodIssue[]): Record<string, string[]> {
-	const errors: Record<string, string[]> = {};
-	for (const issue of issues) {
-		const key = issue.path.length ? issue.path.join('.') : '_';
-		(errors[key] ??= []).push(issue.message);
-	}
-	return errors;
-}
+import type { z } from 'zod';
+import { fieldErrors } from '../services/errors';
 
 const MAX_BODY_BYTES = 256 * 1024;
 

@@ -1,10 +1,10 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { message, setError, type SuperValidated } from 'sveltekit-superforms';
-import { DomainError } from './services/errors';
-import { deleteAttachment, listAttachments, saveAttachment } from './services/inventory-attachments';
-import { listHistory } from './services/inventory-history';
-import { MAX_CSV_BYTES, type CsvKind } from './services/inventory-csv';
-import { amplifiers, loudspeakers } from './services/inventory-resources';
+import { DomainError } from '../services/errors';
+import { deleteAttachment, listAttachments, saveAttachment } from '../services/inventory-attachments';
+import { listHistory } from '../services/inventory-history';
+import { MAX_CSV_BYTES, type CsvKind } from '../services/inventory-csv';
+import { amplifiers, loudspeakers } from '../services/inventory-resources';
 import type { ModelType } from '$lib/inventory/types';
 
 
