@@ -30,6 +30,7 @@ import { packagePatchSchema, packageSchema } from '../../src/lib/schemas/invento
 import { stockUnitPatchSchema, stockUnitSchema } from '../../src/lib/schemas/inventory-units';
 import { repairSchema, scanSchema } from '../../src/lib/schemas/bookings';
 import { quoteRequestSchema } from '../../src/lib/schemas/evaluation';
+import { quoteRequestWithSystemSchema, promoteSchema } from '../../src/lib/schemas/systems';
 import {
 	quoteActionSchema,
 	quoteCreateSchema,
@@ -73,7 +74,7 @@ type Target =
 const TARGETS: Record<string, Target> = {
 	'POST /api/users': { as: 'admin', body: 'json', schema: userCreateSchema },
 	'PATCH /api/users/[id=id]': { as: 'admin', body: 'json', schema: userUpdateSchema },
-	'POST /api/evaluations': { as: 'sales', body: 'json', schema: quoteRequestSchema },
+	'POST /api/evaluations': { as: 'sales', body: 'json', schema: quoteRequestWithSystemSchema },
 	'POST /api/suggestions': { as: 'sales', body: 'json', schema: quoteRequestSchema },
 	'POST /api/clients': { as: 'sales', body: 'json', schema: clientSchema },
 	'PATCH /api/clients/[id=id]': { as: 'sales', body: 'json', schema: clientUpdateSchema },
@@ -98,6 +99,7 @@ const TARGETS: Record<string, Target> = {
 	'POST /api/quotes': { as: 'sales', body: 'json', schema: quoteCreateSchema },
 	'PATCH /api/quotes/[id=id]': { as: 'sales', body: 'json', schema: quoteReviseSchema },
 	'POST /api/quotes/[id=id]/actions': { as: 'sales', body: 'json', schema: quoteActionSchema },
+	'POST /api/quotes/[id=id]/package': { as: 'warehouse', body: 'json', schema: promoteSchema },
 	'POST /api/bookings/[id=id]/dispatch': { as: 'warehouse', body: 'json', schema: scanSchema },
 	'POST /api/bookings/[id=id]/return': { as: 'warehouse', body: 'json', schema: scanSchema },
 	'POST /api/stock-units/[id=id]/repairs': { as: 'warehouse', body: 'json', schema: repairSchema },

@@ -108,6 +108,7 @@ const TABLE: Record<string, Row> = {
 	'GET /api/quotes/[id=id]':                   { out: S, admin: 'ok', warehouse: D, sales: 'ok', client: 'ok', stranger: 'missing' },
 	'PATCH /api/quotes/[id=id]':                 { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D },
 	// A real move ("accept") on the cancelled quote: 409 for those who may try, 404 for another client.
+	'POST /api/quotes/[id=id]/package':          { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D, quote: 'cancelled' },
 	'POST /api/quotes/[id=id]/actions':          { out: S, admin: 409, warehouse: D, sales: 409, client: 409, stranger: 'missing', quote: 'cancelled', json: { action: 'accept' } },
 	'GET /api/quotes/[id=id]/document':         { out: S, admin: 'ok', warehouse: D, sales: 'ok', client: 'ok', stranger: 'missing' }, // the PDF: staff and the owning client
 	'GET /api/company-logo':                     { out: S, admin: 'missing', warehouse: D, sales: 'missing', client: 'missing', stranger: 'missing' }, // no logo in the test world
@@ -217,6 +218,7 @@ const TABLE: Record<string, Row> = {
 	'action /inventory/amplifiers/[id=id]/edit?/default':      { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
 
 	'load /inventory/packages':                  { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
+	'action /inventory/packages?/promote':       { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D }, // the form names no quote: 422
 	'load /inventory/packages/new':              { out: S, admin: 'ok', warehouse: 'ok', sales: D, client: D, stranger: D },
 	'action /inventory/packages/new?/default':   { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D },
 	'load /inventory/packages/[id=id]':          { out: S, admin: 'ok', warehouse: 'ok', sales: 'ok', client: D, stranger: D },
@@ -252,6 +254,7 @@ const TABLE: Record<string, Row> = {
 	'action /quotes/[id=id]?/requestChange':     { out: S, admin: D, warehouse: D, sales: D, client: 409, stranger: 'missing', quote: 'cancelled' },
 	'action /quotes/[id=id]?/cancel':            { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' },
 	'action /quotes/[id=id]?/close':             { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' },
+	'action /quotes/[id=id]?/promote':           { out: S, admin: 'allowed', warehouse: 'allowed', sales: D, client: D, stranger: D, quote: 'cancelled' }, // the form names no package: 422
 	'action /quotes/[id=id]?/balanceInvoice':    { out: S, admin: 'allowed', warehouse: D, sales: 'allowed', client: D, stranger: D, quote: 'cancelled' }
 };
 

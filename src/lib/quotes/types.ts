@@ -1,6 +1,7 @@
 /** What the quote pages show: a quote in a list, a quote in full, and its invoices. */
 import type { Outcome } from '$lib/acoustics';
 import type { SiteSnapshot } from '$lib/schemas/sites';
+import type { SystemInput } from '$lib/schemas/systems';
 import type { QuoteRequestInput } from '$lib/schemas/evaluation';
 import type { PackageResult } from './evaluate-packages';
 import type { ClientResponse, QuoteStatus } from './states';
@@ -32,6 +33,8 @@ export interface QuoteDetail extends QuoteSummary {
 	result: PackageResult;
 	/** The copy of the site this version was evaluated with; null without a site. */
 	site: SiteSnapshot | null;
+	/** The composed or suggested system this version offers; null when it offers a package. */
+	system: SystemInput | null;
 	notes: string | null;
 	recheckReason: string | null;
 	versions: { version: number; createdAt: string; packageName: string; totalMinor: number }[];

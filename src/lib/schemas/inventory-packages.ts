@@ -36,8 +36,11 @@ export const packageFields = z.object({
 	groups: z.array(packageGroupSchema).min(1, 'A package needs at least one group of cabinets').max(20)
 });
 
-/** Checks that need no database: a channel cannot carry more cabinets than the stack has. */
-function checkPackage(v: z.output<typeof packageFields>, ctx: z.RefinementCtx) {
+/**
+ * Checks that need no database: a channel cannot carry more cabinets than the stack has. Shared by
+ * packages and composed systems (the same channel-plan rules).
+ */
+export function checkGroupsFit(v: { groups: readonly { count: number; cabinetsPerChannel: number }[] }, ctx: z.RefinementCtx) {
 	v.groups.forEach((g, i) => {
 		if (g.cabinetsPerChannel > g.count) {
 			ctx.addIssue({
@@ -49,7 +52,7 @@ function checkPackage(v: z.output<typeof packageFields>, ctx: z.RefinementCtx) {
 	});
 }
 
-export const packageSchema = packageFields.superRefine(checkPackage);
+export const packageSchema = packageFields.superRefine(checkGroupsFit);
 export type PackageInput = z.output<typeof packageSchema>;
 
 export const packagePatchSchema = patchSchemaOf(packageFields);

@@ -4,25 +4,43 @@ import { setError, superValidate, type SuperValidated } from 'sveltekit-superfor
 import { zod4 } from 'sveltekit-superforms/adapters';
 import type { z } from 'zod';
 import { formFieldOf, quoteRequestFormSchema, type QuoteRequestForm } from '$lib/schemas/quotes';
-import { Client } from '../db';
+import { composedFrom } from '$lib/systems/compose';
+import { AmplifierModel, Client, LoudspeakerModel } from '../db';
+import { loadedPackages } from '../services/catalogue';
 import { DomainError } from '../services/errors';
 import { listProgrammes } from '../services/programmes';
 import { getSettings } from '../services/settings';
 import { listSites } from '../services/sites';
 
 export async function quoteRequestFormOptions() {
-	const [clients, programmes, settings, sites] = await Promise.all([
+	const [clients, programmes, settings, sites, composer] = await Promise.all([
 		Client.findAll({ attributes: ['id', 'name'], order: [['name', 'ASC']] }),
 		listProgrammes(),
 		getSettings(),
-		listSites()
+		listSites(),
+		composerCatalogue()
 	]);
 	return {
 		clients: clients.map((c) => ({ id: c.id, name: c.name })),
 		programmes: programmes.map((p) => ({ slug: p.slug, name: p.name, crestFactorDb: p.crestFactorDb, isTypical: p.isTypical })),
 		sites: sites.map((s) => ({ id: s.id, name: s.name, receiverCount: s.receiverCount })),
 		defaultMarginDb: settings.defaultMarginDb,
-		distanceUnit: settings.distanceUnit
+		distanceUnit: settings.distanceUnit,
+		composer
+	};
+}
+
+/** What the composer chooses from: the models, and each active package's groups to start from. */
+async function composerCatalogue() {
+	const [loudspeakers, amplifiers, packages] = await Promise.all([
+		LoudspeakerModel.findAll({ attributes: ['id', 'name', 'kind', 'impedanceOhm'], order: [['name', 'ASC']] }),
+		AmplifierModel.findAll({ attributes: ['id', 'name', 'channels', 'minLoadOhm'], order: [['name', 'ASC']] }),
+		loadedPackages({ activeOnly: true })
+	]);
+	return {
+		loudspeakers: loudspeakers.map((m) => ({ id: m.id, name: m.name, kind: m.kind, impedanceOhm: m.impedanceOhm })),
+		amplifiers: amplifiers.map((m) => ({ id: m.id, name: m.name, channels: m.channels, minLoadOhm: m.minLoadOhm })),
+		packages: packages.map((p) => ({ id: p.id, groups: composedFrom(p.groups) }))
 	};
 }
 

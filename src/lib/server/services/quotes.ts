@@ -271,6 +271,7 @@ export async function getQuote(id: number, actor: SessionUser): Promise<QuoteDet
 		request: current.request,
 		result: current.evaluation,
 		site: current.site ?? null,
+		system: current.system ?? null,
 		notes: current.notes,
 		recheckReason: quote.recheckReason,
 		versions: versions.map((v) => ({

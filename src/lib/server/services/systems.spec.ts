@@ -82,4 +82,31 @@ describe('a quote with a composed system', () => {
 			errors: { 'system.groups.0.loudspeakerModelId': expect.any(Array) }
 		});
 	});
+
+	it('two reservations racing for the last units of a composed system: one books, the other is refused, then a clear 409 at acceptance', async () => {
+		const desk = await makeStaffUser();
+		const { client } = await makeContactUser();
+		const { loudspeaker, amplifier } = await makeStockedPackage({ cabinets: 2, units: 2, amplifierUnits: 2 });
+		const system = { groups: [{ loudspeakerModelId: loudspeaker.id, count: 1, stacks: 2, amplifierModelId: amplifier.id, cabinetsPerChannel: 1 }] };
+		const raced = { ...request, startDate: '2031-10-04', endDate: '2031-10-05' };
+		const quotes = [];
+		for (const name of ['Race A', 'Race B']) {
+			const q = await createQuote({ clientId: client.id, eventName: name, system, request: raced }, desk);
+			await applyQuoteAction(q.id, 'send', desk);
+			quotes.push(q);
+		}
+		const outcomes = await Promise.all(quotes.map((q) => reservationTransaction((t) => reserveStockForQuote(q.id, 1, t))));
+		expect(outcomes.filter((o) => o.ok)).toHaveLength(1);
+		const refused = outcomes.find((o) => !o.ok) as Extract<(typeof outcomes)[number], { ok: false }>;
+		expect(refused.shortfalls).toEqual([expect.objectContaining({ name: loudspeaker.name, missing: 2 })]);
+		const reserved = await BookingLine.sum('quantity', { where: { modelType: 'loudspeaker', modelId: loudspeaker.id } });
+		expect(reserved).toBe(2);
+
+		invalidate(BOOKINGS);
+		const loser = quotes[outcomes.findIndex((o) => !o.ok)];
+		await expect(applyQuoteAction(loser.id, 'accept', desk)).rejects.toMatchObject({
+			status: 409,
+			message: expect.stringContaining(`${loudspeaker.name}: 2 short`)
+		});
+	});
 });

@@ -36,7 +36,7 @@ export async function loadSystem(system: SystemInput): Promise<LoadedPackage> {
 			cabinetsPerChannel: g.cabinetsPerChannel,
 			flown: g.flown ?? loudspeaker.kind === 'line-array-element',
 			heightM: g.heightM ?? DEFAULT_HEIGHT_M[loudspeaker.kind] ?? 1.5,
-			spacingM: null,
+			spacingM: g.spacingM ?? null,
 			directivity: g.directivity ?? null,
 			loudspeaker,
 			amplifier: ampById.get(g.amplifierModelId)!

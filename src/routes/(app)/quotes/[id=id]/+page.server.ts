@@ -10,6 +10,7 @@ import { applyQuoteAction, termsFor } from '$lib/server/services/quote-actions';
 import { bookingStateForClient } from '$lib/server/services/booking-life';
 import { createBalanceInvoice } from '$lib/server/services/balance-invoice';
 import { getQuote } from '$lib/server/services/quotes';
+import { promoteSystem } from '$lib/server/services/package-promotion';
 import { getSettings } from '$lib/server/services/settings';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
 
@@ -26,7 +27,8 @@ export const load: PageServerLoad = async (event) => {
 	const cancelNotice = actions.includes('cancel') && can(user.role, 'quotes:write')
 		? cancelConsequences({ status: quote.status, startDate: quote.startDate, today: today(), cancellationFullRefundDays: settings.cancellationFullRefundDays, invoices: quote.invoices })
 		: null;
-	return { quote, actions, terms: termsFor(quote, settings), expired, booking, cancelNotice };
+	const canPromote = quote.system !== null && can(user.role, 'inventory:edit');
+	return { quote, actions, terms: termsFor(quote, settings), expired, booking, cancelNotice, canPromote };
 };
 
 /** The form's extra fields: the ticked terms box and the client's message. */
@@ -62,6 +64,17 @@ export const actions: Actions = {
 		return act('cancel')(event);
 	},
 	close: act('close'),
+	promote: async (event) => {
+		const user = requireCapability(event, 'inventory:edit');
+		const name = String((await event.request.formData()).get('name') ?? '').slice(0, 400);
+		try {
+			const created = await promoteSystem(Number(event.params.id), { name, description: '' }, user.id);
+			return { promoted: { id: created.id, name: created.name } };
+		} catch (err) {
+			if (err instanceof DomainError) return fail(err.status, { promoteError: err.errors?.name?.[0] ?? err.message, promoteName: name });
+			throw err;
+		}
+	},
 	balanceInvoice: async (event) => {
 		const user = requireCapability(event, 'invoices:issue');
 		try {

@@ -18,7 +18,8 @@ export const load: PageServerLoad = async (event) => {
 		clientId: quote.clientId,
 		eventName: quote.eventName,
 		notes: quote.notes ?? '',
-		packageId: quote.result.packageId
+		packageId: quote.system ? null : quote.result.packageId,
+		system: quote.system ? JSON.stringify(quote.system) : ''
 	};
 	const form = await superValidate(values, zod4(quoteRequestFormSchema), { errors: false });
 	return { form, quote: { id: quote.id, reference: quote.reference, clientName: quote.clientName }, ...(await quoteRequestFormOptions()) };
