@@ -30,7 +30,7 @@ describe('the quote list', () => {
 		const byReference = await listQuotes(desk, { search: made[1].reference });
 		expect(byReference.map((q) => q.id)).toContain(made[1].id);
 
-		const { version: _v, request: _r, result: _res, notes: _n, recheckReason: _rr, versions: _vs, emails: _e, sentAt: _s, acceptedAt: _a, invoices: _i, bookingIssue: _b, validUntil: _vu, acceptance: _ac, clientMessage: _cm, respondedAt: _ra, site: _si, ...summary } = await getQuote(made[0].id, desk);
+		const { version: _v, request: _r, result: _res, notes: _n, recheckReason: _rr, versions: _vs, emails: _e, sentAt: _s, acceptedAt: _a, invoices: _i, bookingIssue: _b, validUntil: _vu, acceptance: _ac, clientMessage: _cm, respondedAt: _ra, site: _si, system: _sy, ...summary } = await getQuote(made[0].id, desk);
 		expect(found.at(-1)).toEqual(summary);
 
 		// A client sees only their organisation's quotes, search or not.
