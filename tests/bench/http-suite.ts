@@ -38,6 +38,23 @@ const EVALUATION_WITH_SITE_BODY = {
 	}
 };
 
+/**
+ * The request with a system composed on the desk (the first package's groups as an inline system):
+ * what the composer sends on every edit.
+ */
+async function composedSystemBody(origin: string, sales: string): Promise<Record<string, unknown>> {
+	const get = async (path: string) => {
+		const res = await fetch(`${origin}${path}`, { headers: { cookie: sales, accept: 'application/json' } });
+		if (!res.ok) throw new Error(`GET ${path} answered ${res.status}`);
+		return res.json();
+	};
+	const [first] = (await get('/api/packages')) as { id: number }[];
+	const pkg = (await get(`/api/packages/${first.id}`)) as { groups: Record<string, unknown>[] };
+	const fields = ['loudspeakerModelId', 'count', 'stacks', 'amplifierModelId', 'cabinetsPerChannel', 'heightM', 'spacingM', 'flown'];
+	const groups = pkg.groups.map((g) => Object.fromEntries(fields.filter((f) => g[f] != null).map((f) => [f, g[f]])));
+	return { ...EVALUATION_BODY, system: { groups } };
+}
+
 export async function measureHttp(
 	origin: string,
 	sales: string,
@@ -68,6 +85,18 @@ export async function measureHttp(
 				'content-type': 'application/json'
 			},
 			body: JSON.stringify(EVALUATION_WITH_SITE_BODY)
+		},
+		{
+			name: 'POST /api/evaluations with a composed system (sales)',
+			path: '/api/evaluations',
+			method: 'POST',
+			headers: {
+				cookie: sales,
+				origin,
+				accept: 'application/json',
+				'content-type': 'application/json'
+			},
+			body: JSON.stringify(await composedSystemBody(origin, sales))
 		},
 		{
 			name: 'GET /quotes/new (sales, HTML)',
