@@ -60,49 +60,19 @@ export async function measureHttp(
 	sales: string,
 	log: (message: string) => void
 ): Promise<LoadResult[]> {
+	const evaluation = (name: string, body: unknown): LoadTarget => ({
+		name,
+		path: '/api/evaluations',
+		method: 'POST',
+		headers: { cookie: sales, origin, accept: 'application/json', 'content-type': 'application/json' },
+		body: JSON.stringify(body)
+	});
 	const targets: LoadTarget[] = [
 		{ name: 'GET /api/health', path: '/api/health', headers: { accept: 'application/json' } },
-		{
-			name: 'POST /api/evaluations (sales)',
-			path: '/api/evaluations',
-			method: 'POST',
-			headers: {
-				cookie: sales,
-				origin,
-				accept: 'application/json',
-				'content-type': 'application/json'
-			},
-			body: JSON.stringify(EVALUATION_BODY)
-		},
-		{
-			name: 'POST /api/evaluations with a site (sales)',
-			path: '/api/evaluations',
-			method: 'POST',
-			headers: {
-				cookie: sales,
-				origin,
-				accept: 'application/json',
-				'content-type': 'application/json'
-			},
-			body: JSON.stringify(EVALUATION_WITH_SITE_BODY)
-		},
-		{
-			name: 'POST /api/evaluations with a composed system (sales)',
-			path: '/api/evaluations',
-			method: 'POST',
-			headers: {
-				cookie: sales,
-				origin,
-				accept: 'application/json',
-				'content-type': 'application/json'
-			},
-			body: JSON.stringify(await composedSystemBody(origin, sales))
-		},
-		{
-			name: 'GET /quotes/new (sales, HTML)',
-			path: '/quotes/new',
-			headers: { cookie: sales, accept: 'text/html' }
-		}
+		evaluation('POST /api/evaluations (sales)', EVALUATION_BODY),
+		evaluation('POST /api/evaluations with a site (sales)', EVALUATION_WITH_SITE_BODY),
+		evaluation('POST /api/evaluations with a composed system (sales)', await composedSystemBody(origin, sales)),
+		{ name: 'GET /quotes/new (sales, HTML)', path: '/quotes/new', headers: { cookie: sales, accept: 'text/html' } }
 	];
 	// Fail early with a clear message if a target does not answer 200 before loading it.
 	for (const t of targets) {

@@ -20,13 +20,12 @@ import { stopAll } from './proc';
 import { formatTable, writeJson, type Row } from './report';
 import { measureStamps } from './stamps.bench';
 import { setUpWorld, tearDownWorld, type World } from './world';
+import { SALES, WAREHOUSE } from '../helpers/demo-accounts';
 
 process.chdir(fileURLToPath(new URL('../..', import.meta.url)));
 
 const PAGE_JS_TARGET_KB = 200;
 const OVERALL_LIMIT_MS = 50 * 60_000;
-const SALES = 'sales@kestrel-yard.test';
-const WAREHOUSE = 'warehouse@kestrel-yard.test';
 
 /** Main pages and who opens them (signed out for /signin). /inventory redirects to its first list. */
 const PAGES: { path: string; who: string | null }[] = [
@@ -82,9 +81,8 @@ async function main(): Promise<void> {
 		world = await setUpWorld();
 		notes.push(...world.notes);
 		log(`app answered on ${world.origin} (cold start ${world.coldStartS.toFixed(1)} s)`);
-		// http.ts reads ORIGIN and DEMO_PASSWORD when first imported, so import it only now.
+		// http.ts reads ORIGIN when first imported, so import it only now.
 		process.env.ORIGIN = world.origin;
-		process.env.DEMO_PASSWORD = world.env.DEMO_PASSWORD ?? 'throwline-demo';
 		const { sessionCookie } = await import('../e2e/http');
 		const cookies = new Map<string, string>();
 		for (const who of [SALES, WAREHOUSE]) cookies.set(who, await sessionCookie(who));

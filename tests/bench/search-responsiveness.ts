@@ -11,6 +11,7 @@ import { pathToFileURL } from 'node:url';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { createSequelize, databaseConfigFrom } from '../../src/lib/server/db/connection';
 import type { Row } from './report';
+import { SALES } from '../helpers/demo-accounts';
 
 const HEALTH_PER_S = 20;
 const IDLE_SECONDS = 5;
@@ -146,7 +147,7 @@ export async function measureSearchResponsiveness(env: NodeJS.ProcessEnv, origin
 async function standalone(): Promise<void> {
 	const origin = process.env.ORIGIN ?? 'http://127.0.0.1:3100';
 	const { sessionCookie } = await import('../e2e/http');
-	const rows = await measureSearchResponsiveness(process.env, origin, await sessionCookie('sales@kestrel-yard.test'), console.error);
+	const rows = await measureSearchResponsiveness(process.env, origin, await sessionCookie(SALES), console.error);
 	for (const row of rows) console.log(`${row.metric}: ${row.value.toFixed(1)} ${row.unit}${row.ratio !== undefined ? `, baseline ${row.baseline!.toFixed(1)}, ratio ${row.ratio.toFixed(2)}` : ''}`);
 	healthAgent.destroy();
 }

@@ -2,14 +2,13 @@
  * Talking to the cluster test world: the proxy on $ORIGIN, and each app process on its own port
  * (CLUSTER_APP_PORTS) when a test must act through one process and look through the other.
  */
+import { DEMO_PASSWORD } from '../helpers/demo-accounts';
+export { ADMIN, DEMO_PASSWORD, SALES, WAREHOUSE } from '../helpers/demo-accounts';
+
 export const PROXY = process.env.ORIGIN ?? 'http://127.0.0.1:3100';
 export const [PROCESS_A, PROCESS_B] = (process.env.CLUSTER_APP_PORTS ?? '3150 3151')
 	.split(' ')
 	.map((port) => `http://127.0.0.1:${port}`);
-export const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? 'throwline-demo';
-export const ADMIN = 'admin@kestrel-yard.test';
-export const SALES = 'sales@kestrel-yard.test';
-export const WAREHOUSE = 'warehouse@kestrel-yard.test';
 
 export interface Answer {
 	status: number;

@@ -5,10 +5,8 @@ import { checkPage, focusState, openAllDetails, WIDE, type PageCheck } from './a
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
 import { api, sessionCookie } from './http';
 import { makeFixtures, tag } from './inventory-helpers';
+import { ADMIN, SALES, WAREHOUSE } from '../helpers/demo-accounts';
 
-const SALES = 'sales@kestrel-yard.test';
-const WAREHOUSE = 'warehouse@kestrel-yard.test';
-const ADMIN = 'admin@kestrel-yard.test';
 const CLIENT = 'events@st-aldric.test';
 
 let browser: Browser;

@@ -1,9 +1,10 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { DEMO_PASSWORD } from '../helpers/demo-accounts';
 
+export { DEMO_PASSWORD };
 export const BASE_URL = process.env.ORIGIN ?? 'http://127.0.0.1:3100';
-export const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? 'throwline-demo';
 
 /** Debian's chromium, with the flags that work as root on a machine without outside network.
  * Playwright gives every launch a fresh temporary profile. */

@@ -13,6 +13,7 @@ import { clientSessionFor, sentQuoteForNewClient, tag, SALES, ADMIN } from '../h
 import { BASE_URL } from './browser';
 import { api, sessionCookie } from './http';
 import { formatDate } from '../../src/lib/format/dates';
+import { WAREHOUSE } from '../helpers/demo-accounts';
 
 useTestDatabase();
 let sales: string;
@@ -20,7 +21,7 @@ let warehouse: string;
 let client: string;
 beforeAll(async () => {
 	sales = await sessionCookie(SALES);
-	warehouse = await sessionCookie('warehouse@kestrel-yard.test');
+	warehouse = await sessionCookie(WAREHOUSE);
 	client = await sessionCookie('events@st-aldric.test');
 });
 
@@ -121,7 +122,7 @@ describe('bad input gets a calm answer and changes nothing', () => {
 
 	it('a sign-in link asked for a staff address is answered 202 like any other, and none is sent', async () => {
 		const since = new Date();
-		const staff = 'warehouse@kestrel-yard.test';
+		const staff = WAREHOUSE;
 		const answer = await api('/api/sign-in-links', { method: 'POST', body: { email: staff } });
 		expect(answer.status).toBe(202);
 		const nobody = await api('/api/sign-in-links', { method: 'POST', body: { email: `nobody-${tag()}@example.test` } });

@@ -6,6 +6,7 @@
 import { randomUUID } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { api, sessionCookie } from './http';
+import { SALES, WAREHOUSE } from '../helpers/demo-accounts';
 
 const request = {
 	targetDb: 92, weighting: 'A', distance: 20, distanceUnit: 'm', programme: 'speech',
@@ -19,7 +20,7 @@ let group: Group;
 let clientId = 0;
 
 beforeAll(async () => {
-	[sales, warehouse] = await Promise.all([sessionCookie('sales@kestrel-yard.test'), sessionCookie('warehouse@kestrel-yard.test')]);
+	[sales, warehouse] = await Promise.all([sessionCookie(SALES), sessionCookie(WAREHOUSE)]);
 	const packages = (await api('/api/packages', { cookie: sales })).json as { active: boolean; groups: Group[] }[];
 	const g = packages.find((p) => p.active)!.groups[0];
 	group = { loudspeakerModelId: g.loudspeakerModelId, count: g.count, stacks: g.stacks, amplifierModelId: g.amplifierModelId, cabinetsPerChannel: g.cabinetsPerChannel };

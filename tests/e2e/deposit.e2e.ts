@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { waitForMail } from '../fakes/mailbox';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
 import { api, sessionCookie } from './http';
+import { ADMIN, SALES } from '../helpers/demo-accounts';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -16,7 +17,7 @@ const CLIENT = 'events@st-aldric.test';
 
 /** A sent quote for the school's graduation, made through the API as the desk would. */
 async function sentQuote(): Promise<number> {
-	const sales = await sessionCookie('sales@kestrel-yard.test');
+	const sales = await sessionCookie(SALES);
 	const request = {
 		targetDb: 85, weighting: 'A', distance: 15, distanceUnit: 'm', programme: 'speech',
 		startDate: '2033-06-20', endDate: '2033-06-20'
@@ -25,7 +26,7 @@ async function sentQuote(): Promise<number> {
 	const pick = ranked.json.results.find((r: { verdict: string }) => r.verdict !== 'short') ?? ranked.json.results[0];
 	const quotes = await api('/api/quotes', { cookie: await sessionCookie(CLIENT) });
 	const clientId = quotes.json[0]?.clientId;
-	const list = await api('/api/users', { cookie: await sessionCookie('admin@kestrel-yard.test') });
+	const list = await api('/api/users', { cookie: await sessionCookie(ADMIN) });
 	const schoolClientId = clientId ?? list.json.find((u: { email: string }) => u.email === CLIENT).clientId;
 	const created = await api('/api/quotes', {
 		cookie: sales,

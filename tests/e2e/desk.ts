@@ -1,6 +1,7 @@
 /** The sales desk's first steps in the browser, shared by the end-to-end tests of the quote desk. */
 import type { Browser, Page } from 'playwright-core';
 import { BASE_URL, signIn } from './browser';
+import { SALES } from '../helpers/demo-accounts';
 
 /** The client the desk tests quote for, and the contact who receives and answers the quote. */
 export const CLIENT_NAME = 'Millbrook Riverside Food Festival';
@@ -20,7 +21,7 @@ export interface DeskRequest {
  */
 export async function openDeskRequest(browser: Browser, request: DeskRequest): Promise<Page> {
 	const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-	await signIn(page, 'sales@kestrel-yard.test');
+	await signIn(page, SALES);
 	await page.waitForURL(`${BASE_URL}/`);
 	await page.goto(`${BASE_URL}/quotes/new`);
 	await page.getByLabel('Client', { exact: true }).selectOption({ label: CLIENT_NAME });
@@ -31,4 +32,15 @@ export async function openDeskRequest(browser: Browser, request: DeskRequest): P
 	await page.getByLabel(/Distance from the system to the position/).fill(String(request.distanceM));
 	await page.getByText(/packages checked/).waitFor();
 	return page;
+}
+
+/** Saves the request page's quote with the chosen system and sends it; answers the quote's URL. */
+export async function saveAndSendQuoteWith(page: Page, systemName: string): Promise<string> {
+	await page.getByRole('button', { name: `Save quote with ${systemName}` }).click();
+	await page.waitForURL(/\/quotes\/\d+$/);
+	const quoteUrl = page.url();
+	await page.getByText(systemName).first().waitFor();
+	await page.getByRole('button', { name: 'Send to client' }).click();
+	await page.getByText('Sent: the client has the quote by e-mail.').waitFor();
+	return quoteUrl;
 }

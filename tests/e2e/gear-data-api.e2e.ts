@@ -6,13 +6,14 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { BASE_URL } from './browser';
 import { api, sessionCookie } from './http';
 import { loudspeakerBody, makeFixtures } from './inventory-helpers';
+import { ADMIN, SALES, WAREHOUSE } from '../helpers/demo-accounts';
 
 const table = { anglesDeg: [0, 90, 180], bandsDb: { '63': [0, 1, 2], '1000': [0, 9, 18] } };
 const cookies: Record<string, string> = {};
 beforeAll(async () => {
-	cookies.warehouse = await sessionCookie('warehouse@kestrel-yard.test');
-	cookies.admin = await sessionCookie('admin@kestrel-yard.test');
-	cookies.sales = await sessionCookie('sales@kestrel-yard.test');
+	cookies.warehouse = await sessionCookie(WAREHOUSE);
+	cookies.admin = await sessionCookie(ADMIN);
+	cookies.sales = await sessionCookie(SALES);
 });
 
 async function postCsv(path: string, text: string, cookie: string) {

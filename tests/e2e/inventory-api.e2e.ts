@@ -3,12 +3,13 @@ import { BASE_URL } from './browser';
 import { api, sessionCookie } from './http';
 import { amplifierBody, loudspeakerBody, makeFixtures, tag } from './inventory-helpers';
 import { AMPLIFIER_CSV_COLUMNS } from '../../src/lib/inventory/csv';
+import { ADMIN, SALES, WAREHOUSE } from '../helpers/demo-accounts';
 
 const cookies: Record<string, string> = {};
 beforeAll(async () => {
-	cookies.warehouse = await sessionCookie('warehouse@kestrel-yard.test');
-	cookies.admin = await sessionCookie('admin@kestrel-yard.test');
-	cookies.sales = await sessionCookie('sales@kestrel-yard.test');
+	cookies.warehouse = await sessionCookie(WAREHOUSE);
+	cookies.admin = await sessionCookie(ADMIN);
+	cookies.sales = await sessionCookie(SALES);
 });
 
 async function send(path: string, body: BodyInit, contentType: string | null, cookie = cookies.warehouse) {

@@ -4,6 +4,7 @@ import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
 import { api, sessionCookie } from './http';
 import { amplifierBody, loudspeakerBody } from './inventory-helpers';
 import { AMPLIFIER_CSV_COLUMNS } from '../../src/lib/inventory/csv';
+import { SALES, WAREHOUSE } from '../helpers/demo-accounts';
 
 let browser: Browser;
 let modelId: number;
@@ -12,7 +13,7 @@ let tableModelId: number;
 const table = { anglesDeg: [0, 30, 60, 90, 120, 150, 180], bandsDb: { '125': [0, 0, 1, 2, 3, 4, 5], '1000': [0, 2, 6, 11, 14, 16, 17] } };
 beforeAll(async () => {
 	browser = await launchBrowser();
-	const cookie = await sessionCookie('warehouse@kestrel-yard.test');
+	const cookie = await sessionCookie(WAREHOUSE);
 	const created = await api('/api/loudspeakers', { cookie, method: 'POST', body: loudspeakerBody({ sensitivityDb: 96 }) });
 	modelId = created.json.id;
 	const withTable = await api('/api/loudspeakers', { cookie, method: 'POST', body: loudspeakerBody({ directivity: table }) });
@@ -25,7 +26,7 @@ afterAll(async () => {
 describe('inventory in the browser', () => {
 	it('a warehouse user edits a loudspeaker’s sensitivity and sees it in the spec history', async () => {
 		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-		await signIn(page, 'warehouse@kestrel-yard.test');
+		await signIn(page, WAREHOUSE);
 		await page.waitForURL(`${BASE_URL}/`);
 		await page.goto(`${BASE_URL}/inventory/loudspeakers/${modelId}`);
 		await page.getByRole('link', { name: 'Edit specification' }).click();
@@ -48,11 +49,11 @@ describe('inventory in the browser', () => {
 	});
 
 	it('shows day rates and their changes as money with the currency, never minor units', async () => {
-		const cookie = await sessionCookie('warehouse@kestrel-yard.test');
+		const cookie = await sessionCookie(WAREHOUSE);
 		const changed = await api(`/api/loudspeakers/${modelId}`, { cookie, method: 'PATCH', body: { dayRateMinor: 3250 } });
 		expect(changed.status).toBe(200);
 		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-		await signIn(page, 'warehouse@kestrel-yard.test');
+		await signIn(page, WAREHOUSE);
 		await page.waitForURL(`${BASE_URL}/`);
 		await page.goto(`${BASE_URL}/inventory/loudspeakers/${modelId}`);
 		const row = page.getByTestId('spec-history').getByRole('row').filter({ hasText: 'Day rate' });
@@ -66,7 +67,7 @@ describe('inventory in the browser', () => {
 
 	it('a warehouse user edits one directivity cell with the keyboard and sees it in the spec history', async () => {
 		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-		await signIn(page, 'warehouse@kestrel-yard.test');
+		await signIn(page, WAREHOUSE);
 		await page.waitForURL(`${BASE_URL}/`);
 		await page.goto(`${BASE_URL}/inventory/loudspeakers/${tableModelId}/edit`);
 		// Arrow keys move between cells: from 125 Hz at 60° down to 1 kHz at 60°.
@@ -86,7 +87,7 @@ describe('inventory in the browser', () => {
 
 	it('on a phone the directivity grid scrolls inside its own box and says so', async () => {
 		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
-		await signIn(page, 'warehouse@kestrel-yard.test');
+		await signIn(page, WAREHOUSE);
 		await page.waitForURL(`${BASE_URL}/`);
 		await page.goto(`${BASE_URL}/inventory/loudspeakers/${tableModelId}/edit`);
 		const grid = page.getByRole('region', { name: 'Directivity (polar data), a table you can scroll sideways' });
@@ -101,12 +102,12 @@ describe('inventory in the browser', () => {
 	});
 
 	it('the CSV import preview shows old → new as money, by the spreadsheet’s row numbers, for a file with the old headers', async () => {
-		const cookie = await sessionCookie('warehouse@kestrel-yard.test');
+		const cookie = await sessionCookie(WAREHOUSE);
 		const amp = (await api('/api/amplifiers', { cookie, method: 'POST', body: amplifierBody() })).json;
 		const row = (dayRate: number) => `${amp.name},${amp.maker},2,800,1400,,4,2,10,${dayRate},120000,3,`;
 		const csv = `${AMPLIFIER_CSV_COLUMNS.join(',')}\r\n${row(3100)}\r\n`;
 		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-		await signIn(page, 'warehouse@kestrel-yard.test');
+		await signIn(page, WAREHOUSE);
 		await page.waitForURL(`${BASE_URL}/`);
 		await page.goto(`${BASE_URL}/inventory/import`);
 		await page.getByLabel('Which models').selectOption('amplifiers');
@@ -122,7 +123,7 @@ describe('inventory in the browser', () => {
 
 	it('sales sees the model but no edit controls', async () => {
 		const page = await browser.newPage();
-		await signIn(page, 'sales@kestrel-yard.test');
+		await signIn(page, SALES);
 		await page.waitForURL(`${BASE_URL}/`);
 		await page.goto(`${BASE_URL}/inventory/loudspeakers/${modelId}`);
 		await page.getByTestId('spec-history').waitFor();
@@ -133,7 +134,7 @@ describe('inventory in the browser', () => {
 
 	it('works on a phone: the tables scroll inside their box, the page never sideways', async () => {
 		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
-		await signIn(page, 'warehouse@kestrel-yard.test');
+		await signIn(page, WAREHOUSE);
 		await page.waitForURL(`${BASE_URL}/`);
 		for (const path of ['/inventory/loudspeakers', '/inventory/units', `/inventory/loudspeakers/${modelId}/edit`, '/inventory/packages/new']) {
 			await page.goto(`${BASE_URL}${path}`);

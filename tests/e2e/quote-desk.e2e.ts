@@ -4,6 +4,7 @@ import { waitForMail } from '../fakes/mailbox';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
 import { CLIENT_EMAIL, openDeskRequest } from './desk';
 import { api, sessionCookie } from './http';
+import { DEMO_PASSWORD, SALES, WAREHOUSE } from '../helpers/demo-accounts';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -50,7 +51,7 @@ describe('the desk flow, end to end', () => {
 		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
 		await page.goto(link);
 		await page.getByLabel('E-mail').fill(CLIENT_EMAIL);
-		await page.getByLabel('Password').fill(process.env.DEMO_PASSWORD ?? 'throwline-demo');
+		await page.getByLabel('Password').fill(DEMO_PASSWORD);
 		await page.getByRole('button', { name: 'Sign in' }).click();
 		await page.waitForURL(quoteUrl);
 		await page.getByRole('heading', { name: 'Riverside main stage, browser test' }).waitFor();
@@ -99,10 +100,10 @@ describe('the quote list and a request in feet, as the desk reads them', () => {
 	});
 
 	it('lists quotes in the order its heading states: the last changed first', async () => {
-		const cookie = await sessionCookie('sales@kestrel-yard.test');
+		const cookie = await sessionCookie(SALES);
 		const listed = (await api('/api/quotes', { cookie })).json as { reference: string; updatedAt: string }[];
 		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-		await signIn(page, 'sales@kestrel-yard.test');
+		await signIn(page, SALES);
 		await page.waitForURL(`${BASE_URL}/`);
 		await page.goto(`${BASE_URL}/quotes`);
 		await page.getByText('Every quote, the last changed first.').waitFor();
@@ -117,7 +118,7 @@ describe('the quote list and a request in feet, as the desk reads them', () => {
 
 describe('cancelling a quote', () => {
 	it('asks for confirmation with the consequences in words, and a form post without it changes nothing', async () => {
-		const sales = await sessionCookie('sales@kestrel-yard.test');
+		const sales = await sessionCookie(SALES);
 		const request = { targetDb: 80, weighting: 'A', distance: 10, distanceUnit: 'm', programme: 'speech', startDate: '2032-09-12', endDate: '2032-09-12' };
 		const ranked = await api('/api/evaluations', { cookie: sales, method: 'POST', body: request });
 		const clients = await api('/api/clients', { cookie: sales });
@@ -132,7 +133,7 @@ describe('cancelling a quote', () => {
 		expect((await api(`/api/quotes/${created.json.id}`, { cookie: sales })).json.status).toBe('draft');
 
 		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
-		await signIn(page, 'sales@kestrel-yard.test');
+		await signIn(page, SALES);
 		await page.waitForURL(`${BASE_URL}/`);
 		await page.goto(url);
 		await page.getByText('Cancel quote…').click();
@@ -149,7 +150,7 @@ describe('cancelling a quote', () => {
 describe('a new organiser without an account', () => {
 	it('gets a one-time sign-in link with the quote that opens it, once', async () => {
 		const email = `new-organiser-${Date.now()}@example.test`;
-		const sales = await sessionCookie('sales@kestrel-yard.test');
+		const sales = await sessionCookie(SALES);
 		const request = { targetDb: 80, weighting: 'A', distance: 10, distanceUnit: 'm', programme: 'speech', startDate: '2032-09-05', endDate: '2032-09-05' };
 		const ranked = await api('/api/evaluations', { cookie: sales, method: 'POST', body: request });
 		const created = await api('/api/quotes', {
@@ -181,7 +182,7 @@ describe('POST /api/evaluations', () => {
 	};
 
 	it('ranks packages clear → tight → over the limit → short for sales and admin; 403 for others; 401 signed out', async () => {
-		const sales = await sessionCookie('sales@kestrel-yard.test');
+		const sales = await sessionCookie(SALES);
 		const result = await api('/api/evaluations', { cookie: sales, method: 'POST', body });
 		expect(result.status).toBe(200);
 		const order = { clear: 0, tight: 1, 'over-limit': 2, short: 3 } as Record<string, number>;
@@ -191,13 +192,13 @@ describe('POST /api/evaluations', () => {
 			expect(Number.isInteger(r.price.totalMinor)).toBe(true);
 			if (r.evaluation) expect(r.evaluation.boundary.weighting).toBe('C');
 		}
-		expect((await api('/api/evaluations', { cookie: await sessionCookie('warehouse@kestrel-yard.test'), method: 'POST', body })).status).toBe(403);
+		expect((await api('/api/evaluations', { cookie: await sessionCookie(WAREHOUSE), method: 'POST', body })).status).toBe(403);
 		expect((await api('/api/evaluations', { cookie: await sessionCookie(CLIENT_EMAIL), method: 'POST', body })).status).toBe(403);
 		expect((await api('/api/evaluations', { method: 'POST', body })).status).toBe(401);
 	});
 
 	it('answers bad input with 400/422 and field errors, never a 500', async () => {
-		const cookie = await sessionCookie('sales@kestrel-yard.test');
+		const cookie = await sessionCookie(SALES);
 		const bad = await api('/api/evaluations', {
 			cookie,
 			method: 'POST',

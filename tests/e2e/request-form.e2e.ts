@@ -2,6 +2,7 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BASE_URL, launchBrowser, signIn } from './browser';
+import { SALES } from '../helpers/demo-accounts';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -14,7 +15,7 @@ afterAll(async () => {
 describe('the request form', () => {
 	it('converts every distance between m and ft, moves Hire until with Hire from, and keeps the desk’s pick', async () => {
 		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-		await signIn(page, 'sales@kestrel-yard.test');
+		await signIn(page, SALES);
 		await page.waitForURL(`${BASE_URL}/`);
 		await page.goto(`${BASE_URL}/quotes/new`);
 

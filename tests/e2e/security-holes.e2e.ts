@@ -7,9 +7,8 @@ import Stripe from 'stripe';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { BASE_URL, launchBrowser, signIn } from './browser';
 import { api, sessionCookie } from './http';
+import { ADMIN, SALES, WAREHOUSE } from '../helpers/demo-accounts';
 
-const ADMIN = 'admin@kestrel-yard.test';
-const SALES = 'sales@kestrel-yard.test';
 const CLIENT = 'organiser@millbrook-riverside.test';
 
 let admin: string;
@@ -169,7 +168,7 @@ describe('5. security headers on every answer, and a failed sign-in is not a 500
 		try {
 			const visits = [
 				[SALES, ['/', '/quotes', '/quotes/new', '/bookings']],
-				['warehouse@kestrel-yard.test', ['/inventory/loudspeakers', '/inventory/units', '/inventory/packages']],
+				[WAREHOUSE, ['/inventory/loudspeakers', '/inventory/units', '/inventory/packages']],
 				[ADMIN, ['/admin/users', '/admin/settings']]
 			] as const;
 			for (const [who, paths] of visits) {
@@ -355,7 +354,7 @@ describe('8. webhooks are checked against the payment service', () => {
 
 describe('9. spec sheets are downloaded, never rendered as our page', () => {
 	it('serves a PDF as an attachment with nosniff', async () => {
-		const warehouse = await sessionCookie('warehouse@kestrel-yard.test');
+		const warehouse = await sessionCookie(WAREHOUSE);
 		const speakers = await api('/api/loudspeakers', { cookie: warehouse });
 		const speakerId = (speakers.json.items ?? speakers.json.rows ?? speakers.json)[0].id;
 		const data = new FormData();

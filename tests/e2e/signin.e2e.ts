@@ -1,6 +1,7 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
+import { ADMIN, DEMO_PASSWORD, SALES, WAREHOUSE } from '../helpers/demo-accounts';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -11,9 +12,9 @@ afterAll(async () => {
 });
 
 const staff = [
-	{ role: 'admin', email: 'admin@kestrel-yard.test', sees: ['Overview', 'Users'] },
-	{ role: 'warehouse', email: 'warehouse@kestrel-yard.test', sees: ['Overview'], hidden: ['Users'] },
-	{ role: 'sales', email: 'sales@kestrel-yard.test', sees: ['Overview'], hidden: ['Users'] }
+	{ role: 'admin', email: ADMIN, sees: ['Overview', 'Users'] },
+	{ role: 'warehouse', email: WAREHOUSE, sees: ['Overview'], hidden: ['Users'] },
+	{ role: 'sales', email: SALES, sees: ['Overview'], hidden: ['Users'] }
 ];
 
 describe('sign-in and navigation by role', () => {
@@ -36,7 +37,7 @@ describe('sign-in and navigation by role', () => {
 
 	it('a wrong password and an unknown e-mail get the same calm message', async () => {
 		const page = await browser.newPage();
-		await signIn(page, 'sales@kestrel-yard.test', 'not-the-password');
+		await signIn(page, SALES, 'not-the-password');
 		const wrongPassword = await page.getByRole('alert').textContent();
 		await signIn(page, 'nobody@kestrel-yard.test', 'not-the-password');
 		const unknownEmail = await page.getByRole('alert').textContent();
@@ -58,8 +59,8 @@ describe('sign-in and navigation by role', () => {
 		const page = await browser.newPage();
 		await page.goto(`${BASE_URL}/admin/users`);
 		expect(new URL(page.url()).pathname).toBe('/signin');
-		await page.getByLabel('E-mail').fill('admin@kestrel-yard.test');
-		await page.getByLabel('Password').fill(process.env.DEMO_PASSWORD ?? 'throwline-demo');
+		await page.getByLabel('E-mail').fill(ADMIN);
+		await page.getByLabel('Password').fill(DEMO_PASSWORD);
 		await page.getByRole('button', { name: 'Sign in' }).click();
 		await page.waitForURL(`${BASE_URL}/admin/users`);
 		await page.getByRole('heading', { name: 'Users' }).waitFor();
@@ -68,7 +69,7 @@ describe('sign-in and navigation by role', () => {
 
 	it('the shell works on a phone: menu button, no sideways scroll', async () => {
 		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
-		await signIn(page, 'admin@kestrel-yard.test');
+		await signIn(page, ADMIN);
 		await page.waitForURL(`${BASE_URL}/`);
 		await page.getByRole('button', { name: 'Menu' }).click();
 		await page.locator('#phone-menu').getByRole('link', { name: 'Users' }).waitFor();

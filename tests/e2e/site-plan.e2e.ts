@@ -8,8 +8,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runAxe } from './a11y/axe';
 import { horizontalOverflow, PHONE, WIDE } from './a11y/pages';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
+import { SALES } from '../helpers/demo-accounts';
 
-const SALES = 'sales@kestrel-yard.test';
 const PATH = '/sites/plan-preview';
 
 let browser: Browser;

@@ -6,6 +6,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
+import { SALES } from '../helpers/demo-accounts';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -17,7 +18,7 @@ afterAll(async () => {
 
 async function salesPage(): Promise<Page> {
 	const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-	await signIn(page, 'sales@kestrel-yard.test');
+	await signIn(page, SALES);
 	await page.waitForURL(`${BASE_URL}/`);
 	return page;
 }

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { BASE_URL } from './browser';
 import { api, sessionCookie } from './http';
+import { SALES } from '../helpers/demo-accounts';
 
-const SALES = 'sales@kestrel-yard.test';
 
 const request = {
 	targetDb: 98, weighting: 'A', distance: 30, distanceUnit: 'm', programme: 'speech',

@@ -1,7 +1,7 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
-import { CLIENT_EMAIL, openDeskRequest } from './desk';
+import { CLIENT_EMAIL, openDeskRequest, saveAndSendQuoteWith } from './desk';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -26,12 +26,7 @@ describe('suggesting a system from stock, end to end', () => {
 		expect(systemName).toMatch(/ × /);
 		await screenshot(page, 'quote-suggested-1280');
 
-		await page.getByRole('button', { name: `Save quote with ${systemName}` }).click();
-		await page.waitForURL(/\/quotes\/\d+$/);
-		quoteUrl = page.url();
-		await page.getByText(systemName).first().waitFor();
-		await page.getByRole('button', { name: 'Send to client' }).click();
-		await page.getByText('Sent: the client has the quote by e-mail.').waitFor();
+		quoteUrl = await saveAndSendQuoteWith(page, systemName);
 		await page.close();
 	}, 90_000);
 

@@ -3,6 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser, signIn } from './browser';
 import { api, sessionCookie } from './http';
+import { ADMIN } from '../helpers/demo-accounts';
 
 const cookies: Record<string, string> = {};
 beforeAll(async () => {
@@ -39,7 +40,7 @@ describe('/api/users by role', () => {
 	])('GET as %s → %i', async (_label, role, status) => {
 		const result = await api('/api/users', { cookie: role ? cookies[role] : undefined });
 		expect(result.status).toBe(status);
-		if (status === 200) expect(result.json.map((u: { email: string }) => u.email)).toContain('admin@kestrel-yard.test');
+		if (status === 200) expect(result.json.map((u: { email: string }) => u.email)).toContain(ADMIN);
 		else expect(result.json).toHaveProperty('message');
 	});
 

@@ -3,10 +3,8 @@
  * time it waited instead of hanging the suite. Each answer carries how long it took.
  */
 import { world } from './world-info';
-
-export const DEMO_PASSWORD = 'throwline-demo';
-export const SALES = 'sales@kestrel-yard.test';
-export const ADMIN = 'admin@kestrel-yard.test';
+import { ADMIN, DEMO_PASSWORD, SALES } from '../helpers/demo-accounts';
+export { ADMIN, DEMO_PASSWORD, SALES } from '../helpers/demo-accounts';
 
 export interface Answer {
 	status: number;

@@ -4,9 +4,9 @@ import { expect } from 'vitest';
 import { SignInLink, User } from '../../src/lib/server/db/models';
 import { BASE_URL } from '../e2e/browser';
 import { api, sessionCookie } from '../e2e/http';
+import { ADMIN, SALES } from './demo-accounts';
+export { ADMIN, SALES } from './demo-accounts';
 
-export const SALES = 'sales@kestrel-yard.test';
-export const ADMIN = 'admin@kestrel-yard.test';
 
 export const tag = () => randomUUID().slice(0, 8);
 

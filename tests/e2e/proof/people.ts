@@ -1,14 +1,15 @@
 /** The people the proof suite acts as, and their session cookies. */
 import { sessionCookie } from '../http';
+import { ADMIN, SALES, WAREHOUSE } from '../../helpers/demo-accounts';
 
 export const ROLES = ['out', 'admin', 'warehouse', 'sales', 'client', 'stranger'] as const;
 export type Role = (typeof ROLES)[number];
 
 /** `client` owns the quotes the suite makes; `stranger` is another client organisation's account. */
 export const EMAILS: Record<Exclude<Role, 'out'>, string> = {
-	admin: 'admin@kestrel-yard.test',
-	warehouse: 'warehouse@kestrel-yard.test',
-	sales: 'sales@kestrel-yard.test',
+	admin: ADMIN,
+	warehouse: WAREHOUSE,
+	sales: SALES,
 	client: 'organiser@millbrook-riverside.test',
 	stranger: 'events@st-aldric.test'
 };
