@@ -14,7 +14,7 @@ function cMinusA(bands: Record<string, number>): number {
 	return sumLevels(entries.map((e) => e.level + cWeighting(e.f))) - sumLevels(entries.map((e) => e.level + aWeighting(e.f)));
 }
 
-// Common practice (not a standard): the gap each kind of programme shows at the mix position.
+// Common practice (not a standard): the gap each kind of programme shows at front of house.
 const EXPECTED_GAP_DB: Record<string, [number, number]> = {
 	'pop-rock': [10, 20],
 	dance: [10, 20],

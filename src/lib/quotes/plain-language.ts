@@ -38,7 +38,7 @@ export function boundarySentence(result: PackageResult, request: QuoteRequestInp
 	const verdict = b.marginDb >= 0
 		? `within the ${b.limitDb} dB(${b.weighting}) limit by ${b.marginDb.toFixed(1)} dB`
 		: `over the ${b.limitDb} dB(${b.weighting}) limit by ${Math.abs(b.marginDb).toFixed(1)} dB`;
-	return `At the boundary, ${where} away, we predict ${predicted}: ${verdict}. To stay within the limit the level at the mix position should not exceed ${b.maxTargetDb.toFixed(1)} dB(${request.weighting}).`;
+	return `At the boundary, ${where} away, we predict ${predicted}: ${verdict}. To stay within the limit the level at front of house should not exceed ${b.maxTargetDb.toFixed(1)} dB(${request.weighting}).`;
 }
 
 /** "Over the limit" in words: which neighbour, by how much, and the level that would keep them all within limits. */
@@ -47,9 +47,9 @@ export function limitsSentence(result: PackageResult, request: QuoteRequestInput
 	if (!limits || limits.maxTargetDb === null) return null;
 	const ceiling = `${limits.maxTargetDb.toFixed(1)} dB(${request.weighting})`;
 	if (outcomeOf(result) === 'over-limit') {
-		return `Over the limit: at ${request.targetDb} dB(${request.weighting}) this would exceed the limit at ${limits.bindingReceiver}. The level at the mix position should not exceed ${ceiling} to keep every neighbour within its limit.`;
+		return `Over the limit: at ${request.targetDb} dB(${request.weighting}) this would exceed the limit at ${limits.bindingReceiver}. The level at front of house should not exceed ${ceiling} to keep every neighbour within its limit.`;
 	}
-	return `Every neighbour stays within its limit; the limit at ${limits.bindingReceiver} binds first, at ${ceiling} at the mix position.`;
+	return `Every neighbour stays within its limit; the limit at ${limits.bindingReceiver} binds first, at ${ceiling} at front of house.`;
 }
 
 /** One line per receiver: predicted level against its limit. */
