@@ -10,6 +10,7 @@ import {
 	type LevelPoint,
 	type LimitsResult,
 	type Outcome,
+	type PackageSpec,
 	type QuoteRequest,
 	type ReceiverResult,
 	type Verdict
@@ -93,6 +94,21 @@ function limitLabel(evaluation: Evaluation | null, available: boolean): string |
 	return evaluation.limitedBy ? LIMITED_BY_LABELS[evaluation.limitedBy] : null;
 }
 
+/**
+ * Specs kept by a loaded package's groups. The catalogue cache shares one package between requests
+ * (read-only once loaded), so its spec is built once per load, and the acoustic model, which keeps
+ * its prepared package by the spec's identity, prepares it once too.
+ */
+const SPECS = new WeakMap<LoadedPackage['groups'], PackageSpec>();
+function specOf(pkg: LoadedPackage): PackageSpec {
+	let spec = SPECS.get(pkg.groups);
+	if (!spec) {
+		spec = toPackageSpec(pkg);
+		SPECS.set(pkg.groups, spec);
+	}
+	return spec;
+}
+
 export function evaluateOne(pkg: LoadedPackage, ctx: EvaluationContext): PackageResult {
 	const bom = packageBillOfMaterials(pkg.groups);
 	const names = new Map<ModelKey, string>([
@@ -110,7 +126,7 @@ export function evaluateOne(pkg: LoadedPackage, ctx: EvaluationContext): Package
 	let curve: LevelPoint[] = [];
 	let error: string | null = null;
 	try {
-		const spec = toPackageSpec(pkg);
+		const spec = specOf(pkg);
 		evaluation = evaluatePackage(spec, ctx.request);
 		curve = levelCurve(spec, ctx.request, chartDistances(ctx.request));
 	} catch (err) {
