@@ -5,12 +5,12 @@ import { allowedActions, isExpired, type QuoteAction } from '$lib/quotes/states'
 import type { QuoteActionInput } from '$lib/schemas/quotes';
 import { requireCapability } from '$lib/server/auth/guards';
 import { DomainError } from '$lib/server/services/errors';
+import { promoteAction } from '$lib/server/http/promote-action';
 import { orHttpError } from '$lib/server/http/errors';
 import { applyQuoteAction, termsFor } from '$lib/server/services/quote-actions';
 import { bookingStateForClient } from '$lib/server/services/booking-life';
 import { createBalanceInvoice } from '$lib/server/services/balance-invoice';
 import { getQuote } from '$lib/server/services/quotes';
-import { promoteSystem } from '$lib/server/services/package-promotion';
 import { getSettings } from '$lib/server/services/settings';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
 
@@ -64,17 +64,7 @@ export const actions: Actions = {
 		return act('cancel')(event);
 	},
 	close: act('close'),
-	promote: async (event) => {
-		const user = requireCapability(event, 'inventory:edit');
-		const name = String((await event.request.formData()).get('name') ?? '').slice(0, 400);
-		try {
-			const created = await promoteSystem(Number(event.params.id), { name, description: '' }, user.id);
-			return { promoted: { id: created.id, name: created.name } };
-		} catch (err) {
-			if (err instanceof DomainError) return fail(err.status, { promoteError: err.errors?.name?.[0] ?? err.message, promoteName: name });
-			throw err;
-		}
-	},
+	promote: (event) => promoteAction(event, Number(event.params.id)),
 	balanceInvoice: async (event) => {
 		const user = requireCapability(event, 'invoices:issue');
 		try {
