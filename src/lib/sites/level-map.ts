@@ -34,6 +34,8 @@ export interface LevelMap {
 	lines: MapLine[];
 	/** Loudest and quietest level on the map, null when nothing is heard anywhere. */
 	range: [number, number] | null;
+	/** The weighting the lines are drawn in (the toggle may already show the next one while it is computed). */
+	weighting: MapWeighting;
 }
 
 /** Limits the map can show as a line: receivers whose limit is in the map's weighting (not band limits). */
@@ -62,5 +64,5 @@ export function computeLevelMap(input: LevelMapInput): LevelMap {
 		if (v < lo) lo = v;
 		if (v > hi) hi = v;
 	}
-	return { nx, ny, lines, range: lo <= hi ? [lo, hi] : null };
+	return { nx, ny, lines, range: lo <= hi ? [lo, hi] : null, weighting: input.weighting };
 }
