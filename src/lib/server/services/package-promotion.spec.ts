@@ -12,11 +12,14 @@ const request = {
 	temperatureC: 20, humidityPct: 50, startDate: '2031-11-10', endDate: '2031-11-11'
 };
 
-async function quoteWith(offer: 'system' | 'package') {
+// A round-figure rear-rejecting group pattern, not a product's data.
+const rearRejecting = { anglesDeg: [0, 90, 180], bandsDb: { '63': [0, 6, 20] } };
+
+async function quoteWith(offer: 'system' | 'package', directivity?: typeof rearRejecting) {
 	const desk = await makeStaffUser();
 	const { client } = await makeContactUser();
 	const stock = await makeStockedPackage({ cabinets: 4, units: 4, amplifierUnits: 2 });
-	const system = { groups: [{ loudspeakerModelId: stock.loudspeaker.id, count: 2, stacks: 2, amplifierModelId: stock.amplifier.id, cabinetsPerChannel: 2, spacingM: 8 }] };
+	const system = { groups: [{ loudspeakerModelId: stock.loudspeaker.id, count: 2, stacks: 2, amplifierModelId: stock.amplifier.id, cabinetsPerChannel: 2, spacingM: 8, ...(directivity ? { directivity } : {}) }] };
 	const quote = await createQuote(
 		{ clientId: client.id, eventName: 'Promotion fixture', request, ...(offer === 'system' ? { system } : { packageId: stock.pkg.id }) },
 		desk
@@ -35,6 +38,13 @@ describe('promoting a quote’s system to a package', () => {
 		expect(pkg.groups).toEqual([
 			expect.objectContaining({ loudspeakerModelId: stock.loudspeaker.id, count: 2, stacks: 2, cabinetsPerChannel: 2, spacingM: 8, heightM: 2.5, flown: false })
 		]);
+	});
+
+	it('keeps a suggested group’s pattern on the package’s group', async () => {
+		const { quote, desk, stock } = await quoteWith('system', rearRejecting);
+		const row = await promoteSystem(quote.id, { name: `Patterned ${stock.tag}`, description: '' }, desk.id);
+		const pkg = await getLoadedPackage(row.id);
+		expect(pkg.groups[0].directivity).toEqual(rearRejecting);
 	});
 
 	it('refuses a name already in use, whatever its case, with a field error (409)', async () => {

@@ -1,7 +1,7 @@
 /**
  * Promote: a quote's composed or suggested system saved as a new package with the same groups, so
  * the desk can offer it again. The groups are taken as the quote evaluated them (heights and
- * flown filled in), so the package sounds the same as the system did.
+ * flown filled in, a suggested group's pattern kept), so the package sounds the same as the system did.
  */
 import { Op, QueryTypes } from 'sequelize';
 import type { PackageRow } from '$lib/inventory/types';
@@ -37,7 +37,7 @@ export async function promoteSystem(quoteId: number, input: PromoteInput, actorI
 		flown: g.flown,
 		heightM: g.heightM ?? null,
 		spacingM: g.spacingM ?? null,
-		directivity: null
+		directivity: g.directivity ?? null
 	}));
 	// Two promotions racing for one name meet at the unique slug: the second is a 409 too.
 	return createPackage(
