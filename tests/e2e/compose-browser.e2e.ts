@@ -4,11 +4,11 @@
  * saves and sends the quote; the client sees the composed system's lines; the warehouse saves it
  * as a package. Then the composer on a 390 px phone: no sideways scrolling, and axe finds nothing serious.
  */
-import type { Browser, Locator, Page } from 'playwright-core';
+import type { Browser, Locator } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { blocking, runAxe } from './a11y/axe';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
-import { CLIENT_EMAIL, CLIENT_NAME, saveAndSendQuoteWith } from './desk';
+import { CLIENT_EMAIL, openDeskRequest, pickFirstSuggestion, saveAndSendQuoteWith } from './desk';
 import { api, sessionCookie } from './http';
 import { quoteReference } from '../../src/lib/quotes/reference';
 import { SALES, WAREHOUSE } from '../helpers/demo-accounts';
@@ -33,16 +33,15 @@ async function composedPrice(composer: Locator): Promise<string> {
 	return (await price.textContent())!.trim();
 }
 
-async function fillRequest(page: Page, eventName: string) {
-	await page.getByLabel('Client', { exact: true }).selectOption({ label: CLIENT_NAME });
-	await page.getByLabel('Event', { exact: true }).fill(eventName);
-	await page.getByLabel('Hire from').fill(REQUEST.startDate);
-	await page.getByLabel('Hire until').fill(REQUEST.endDate);
-	await page.getByLabel(/Level at the position/).fill(String(REQUEST.targetDb));
-	await page.getByLabel(/Distance from the system to the position/).fill(String(REQUEST.distance));
-	await page.getByLabel('Programme', { exact: true }).selectOption(REQUEST.programme);
-	await page.getByText(/packages checked/).waitFor();
-}
+/** The request as the desk types it, for an event of the given name. */
+const deskRequest = (event: string) => ({
+	event,
+	from: REQUEST.startDate,
+	until: REQUEST.endDate,
+	levelDb: REQUEST.targetDb,
+	distanceM: REQUEST.distance,
+	programme: REQUEST.programme
+});
 
 describe('composing a system, end to end', () => {
 	let quoteUrl = '';
@@ -58,15 +57,9 @@ describe('composing a system, end to end', () => {
 	}, 60_000);
 
 	it('sales picks a suggestion, adds a cabinet in the composer, sees the live result, saves and sends', async () => {
-		const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-		await signIn(page, SALES);
-		await page.waitForURL(`${BASE_URL}/`);
-		await page.goto(`${BASE_URL}/quotes/new`);
-		await fillRequest(page, 'Riverside headline night, composed system');
+		const page = await openDeskRequest(browser, deskRequest('Riverside headline night, composed system'));
 
-		await page.getByRole('button', { name: 'Suggest systems from stock' }).click();
-		await page.getByText(/^Checked \d+ systems/).waitFor({ timeout: 30_000 });
-		await page.getByTestId('pick-system').first().check();
+		await pickFirstSuggestion(page);
 		await page.getByTestId('compose-from-suggestion').click();
 
 		const composer = page.getByTestId('composer');
@@ -140,11 +133,7 @@ describe('composing a system, end to end', () => {
 	}, 60_000);
 
 	it('the composer works on a 390 px phone: no sideways scrolling, nothing serious for axe', async () => {
-		const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
-		await signIn(page, SALES);
-		await page.waitForURL(`${BASE_URL}/`);
-		await page.goto(`${BASE_URL}/quotes/new`);
-		await fillRequest(page, 'Phone check, composed system');
+		const page = await openDeskRequest(browser, deskRequest('Phone check, composed system'), { width: 390, height: 844 });
 		await page.getByRole('button', { name: 'Start from nothing' }).click();
 		const composer = page.getByTestId('composer');
 		const group = composer.getByRole('group', { name: 'Group 1' });

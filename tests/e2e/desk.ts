@@ -13,14 +13,17 @@ export interface DeskRequest {
 	until: string;
 	levelDb: number;
 	distanceM: number;
+	/** A programme profile's key; left out, the form's default. */
+	programme?: string;
 }
 
 /**
- * Signs in as sales at a desk-sized window, fills a new quote's request for the test client (event,
- * hire dates, level and distance at the position) and waits until the packages have been checked.
+ * Signs in as sales (at a desk-sized window unless told), fills a new quote's request for the test
+ * client (event, hire dates, level and distance at the position, programme) and waits until the
+ * packages have been checked.
  */
-export async function openDeskRequest(browser: Browser, request: DeskRequest): Promise<Page> {
-	const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+export async function openDeskRequest(browser: Browser, request: DeskRequest, viewport = { width: 1280, height: 900 }): Promise<Page> {
+	const page = await browser.newPage({ viewport });
 	await signIn(page, SALES);
 	await page.waitForURL(`${BASE_URL}/`);
 	await page.goto(`${BASE_URL}/quotes/new`);
@@ -30,6 +33,7 @@ export async function openDeskRequest(browser: Browser, request: DeskRequest): P
 	await page.getByLabel('Hire until').fill(request.until);
 	await page.getByLabel(/Level at the position/).fill(String(request.levelDb));
 	await page.getByLabel(/Distance from the system to the position/).fill(String(request.distanceM));
+	if (request.programme) await page.getByLabel('Programme', { exact: true }).selectOption(request.programme);
 	await page.getByText(/packages checked/).waitFor();
 	return page;
 }
@@ -43,4 +47,11 @@ export async function saveAndSendQuoteWith(page: Page, systemName: string): Prom
 	await page.getByRole('button', { name: 'Send to client' }).click();
 	await page.getByText('Sent: the client has the quote by e-mail.').waitFor();
 	return quoteUrl;
+}
+
+/** Asks for suggestions from stock, waits for the search to finish and picks the first (cheapest). */
+export async function pickFirstSuggestion(page: Page): Promise<void> {
+	await page.getByRole('button', { name: 'Suggest systems from stock' }).click();
+	await page.getByText(/^Checked \d+ systems/).waitFor({ timeout: 30_000 });
+	await page.getByTestId('pick-system').first().check();
 }

@@ -1,7 +1,7 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BASE_URL, launchBrowser, screenshot, signIn } from './browser';
-import { CLIENT_EMAIL, openDeskRequest, saveAndSendQuoteWith } from './desk';
+import { CLIENT_EMAIL, openDeskRequest, pickFirstSuggestion, saveAndSendQuoteWith } from './desk';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -18,10 +18,7 @@ describe('suggesting a system from stock, end to end', () => {
 	it('sales asks for suggestions, picks one, and saves and sends the quote with it', async () => {
 		const page = await openDeskRequest(browser, { event: 'Riverside talks, suggested system', from: '2032-09-03', until: '2032-09-04', levelDb: 98, distanceM: 30 });
 
-		await page.getByRole('button', { name: 'Suggest systems from stock' }).click();
-		await page.getByText(/^Checked \d+ systems/).waitFor({ timeout: 20_000 });
-		const first = page.getByTestId('pick-system').first();
-		await first.check();
+		await pickFirstSuggestion(page);
 		systemName = (await page.getByTestId('chosen-system').locator('strong').textContent())!;
 		expect(systemName).toMatch(/ × /);
 		await screenshot(page, 'quote-suggested-1280');
